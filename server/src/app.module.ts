@@ -1,0 +1,70 @@
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { LoggerModule } from 'nestjs-pino';
+import { randomUUID } from 'node:crypto';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { AuthModule } from './auth/auth.module';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { RolesGuard } from './common/guards/roles.guard';
+import { TenancyModule } from './common/tenancy/tenancy.module';
+import { AppConfig } from './config/app-config';
+import { AppConfigModule } from './config/app-config.module';
+import { dataSourceOptions } from './database/data-source-options';
+import { HealthModule } from './health/health.module';
+import { InvitesModule } from './invites/invites.module';
+import { UsersModule } from './users/users.module';
+
+@Module({
+  imports: [
+    AppConfigModule,
+    LoggerModule.forRootAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => ({
+        pinoHttp: {
+          level: config.logLevel,
+          genReqId: (request, response) => {
+            const id = (request.headers['x-request-id'] as string | undefined) ?? randomUUID();
+            response.setHeader('x-request-id', id);
+            return id;
+          },
+          // Tokens, cookies and passwords never reach the log.
+          redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
+          autoLogging: { ignore: (request) => request.url === '/api/health' },
+        },
+      }),
+    }),
+    TypeOrmModule.forRootAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => dataSourceOptions(config.database),
+    }),
+    ThrottlerModule.forRootAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => ({
+        throttlers: [{ name: 'per-ip', ttl: 60_000, limit: config.rateLimitPerMinute }],
+      }),
+    }),
+    TenancyModule,
+    AuthModule,
+    UsersModule,
+    InvitesModule,
+    HealthModule,
+    // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
+    ServeStaticModule.forRootAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => {
+        const rootPath = config.clientDistDir ?? resolve(__dirname, '../../client/dist');
+        return existsSync(rootPath) ? [{ rootPath, exclude: ['/api/{*rest}'] }] : [];
+      },
+    }),
+  ],
+  providers: [
+    { provide: APP_GUARD, useClass: ThrottlerGuard },
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+  ],
+})
+export class AppModule {}

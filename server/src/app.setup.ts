@@ -1,0 +1,55 @@
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
+import helmet from 'helmet';
+import { Logger } from 'nestjs-pino';
+import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import { createValidationPipe } from './common/validation/validation-pipe';
+import { AppConfig } from './config/app-config';
+
+/** Everything the running server and the tests configure the same way. */
+export function configureApp(app: NestExpressApplication): void {
+  const config = app.get(AppConfig);
+  app.useLogger(app.get(Logger));
+  app.setGlobalPrefix('api');
+  app.set('trust proxy', config.trustProxy ? 1 : false);
+  app.disable('x-powered-by');
+  app.useBodyParser('json', { limit: '1mb' });
+  app.use(cookieParser());
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          // Mantine writes component styles at run time.
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          frameAncestors: ["'none'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          upgradeInsecureRequests: config.isProduction ? [] : null,
+        },
+      },
+      hsts: config.isProduction,
+      referrerPolicy: { policy: 'no-referrer' },
+    }),
+  );
+  app.useGlobalPipes(createValidationPipe());
+  app.useGlobalFilters(new ApiExceptionFilter());
+  app.enableShutdownHooks();
+
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Pondwright API')
+      .setDescription('Estimating, quoting and job costing for pond and water-feature contractors.')
+      .setVersion('0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
+}

@@ -1,0 +1,68 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { DatabaseSettings } from '../database/data-source-options';
+import type { Env } from './env.schema';
+
+/** Typed, read-only access to the validated settings. Nothing else reads process.env. */
+@Injectable()
+export class AppConfig {
+  constructor(private readonly config: ConfigService<Env, true>) {}
+
+  private get<K extends keyof Env>(key: K): Env[K] {
+    return this.config.get(key, { infer: true });
+  }
+
+  get isProduction(): boolean {
+    return this.get('NODE_ENV') === 'production';
+  }
+  get nodeEnv(): Env['NODE_ENV'] {
+    return this.get('NODE_ENV');
+  }
+  get host(): string {
+    return this.get('HOST');
+  }
+  get port(): number {
+    return this.get('PORT');
+  }
+  /** Where the app is reached by people, used in links such as invites. */
+  get publicAppUrl(): string {
+    return (this.get('PUBLIC_APP_URL') ?? `http://${this.host}:${this.port}`).replace(/\/$/, '');
+  }
+  get trustProxy(): boolean {
+    return this.get('TRUST_PROXY');
+  }
+  get database(): DatabaseSettings {
+    return {
+      host: this.get('DB_HOST'),
+      port: this.get('DB_PORT'),
+      username: this.get('DB_USER'),
+      password: this.get('DB_PASSWORD'),
+      database: this.get('DB_NAME'),
+      poolSize: this.get('DB_POOL_SIZE'),
+    };
+  }
+  get jwt() {
+    return { secret: this.get('JWT_SECRET'), accessTtlSeconds: this.get('JWT_ACCESS_TTL_SECONDS') };
+  }
+  get refreshTtlDays(): number {
+    return this.get('REFRESH_TTL_DAYS');
+  }
+  get inviteTtlHours(): number {
+    return this.get('INVITE_TTL_HOURS');
+  }
+  get loginThrottle() {
+    return {
+      maxFailures: this.get('LOGIN_MAX_FAILURES'),
+      windowMinutes: this.get('LOGIN_FAILURE_WINDOW_MINUTES'),
+    };
+  }
+  get rateLimitPerMinute(): number {
+    return this.get('RATE_LIMIT_PER_MINUTE');
+  }
+  get clientDistDir(): string | undefined {
+    return this.get('CLIENT_DIST_DIR');
+  }
+  get logLevel(): Env['LOG_LEVEL'] {
+    return this.get('LOG_LEVEL');
+  }
+}

@@ -1,0 +1,7 @@
+import { LoginFailure } from '../auth/entities/login-failure.entity';
+import { RefreshToken } from '../auth/entities/refresh-token.entity';
+import { Company } from '../companies/entities/company.entity';
+import { Invite } from '../invites/entities/invite.entity';
+import { User } from '../users/entities/user.entity';
+
+export const entities = [Company, User, Invite, RefreshToken, LoginFailure];

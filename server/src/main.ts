@@ -1,0 +1,19 @@
+import 'reflect-metadata';
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { AppModule } from './app.module';
+import { configureApp } from './app.setup';
+import { AppConfig } from './config/app-config';
+
+async function bootstrap(): Promise<void> {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, { bufferLogs: true });
+  configureApp(app);
+  const config = app.get(AppConfig);
+  await app.listen(config.port, config.host);
+  console.log(`[server] Pondwright listens on http://${config.host}:${config.port} (API under /api, docs at /api/docs)`);
+}
+
+bootstrap().catch((error: unknown) => {
+  console.error('[server] failed to start:', error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,3 @@
+export * from './auth/roles';
+export * from './auth/password-policy';
+export * from './auth/auth-schemas';
