@@ -46,7 +46,10 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['node:*', 'fs', 'path', 'react', '@nestjs/*', 'typeorm'], message: 'shared/ is pure: no I/O or framework imports.' },
+            {
+              group: ['node:*', 'fs', 'path', 'react', '@nestjs/*', 'typeorm'],
+              message: 'shared/ is pure: no I/O or framework imports.',
+            },
           ],
         },
       ],

@@ -27,10 +27,26 @@ const env = {
   PUBLIC_APP_URL: 'http://127.0.0.1:5173',
 };
 const children = [
-  spawn('npx', ['tsc', '-p', 'shared/tsconfig.build.json', '--watch', '--preserveWatchOutput'], { cwd: repoRoot, stdio: 'inherit', env }),
-  spawn('npx', ['tsc', '-p', 'server/tsconfig.build.json', '--watch', '--preserveWatchOutput'], { cwd: repoRoot, stdio: 'inherit', env }),
-  spawn(process.execPath, ['--watch-path=server/dist', '--watch-path=shared/dist', 'server/dist/main.js'], { cwd: repoRoot, stdio: 'inherit', env }),
-  spawn('npx', ['vite', '--host', '127.0.0.1', '--port', '5173'], { cwd: `${repoRoot}/client`, stdio: 'inherit', env }),
+  spawn('npx', ['tsc', '-p', 'shared/tsconfig.build.json', '--watch', '--preserveWatchOutput'], {
+    cwd: repoRoot,
+    stdio: 'inherit',
+    env,
+  }),
+  spawn('npx', ['tsc', '-p', 'server/tsconfig.build.json', '--watch', '--preserveWatchOutput'], {
+    cwd: repoRoot,
+    stdio: 'inherit',
+    env,
+  }),
+  spawn(
+    process.execPath,
+    ['--watch-path=server/dist', '--watch-path=shared/dist', 'server/dist/main.js'],
+    { cwd: repoRoot, stdio: 'inherit', env },
+  ),
+  spawn('npx', ['vite', '--host', '127.0.0.1', '--port', '5173'], {
+    cwd: `${repoRoot}/client`,
+    stdio: 'inherit',
+    env,
+  }),
 ];
 log(`API on http://127.0.0.1:${apiPort}/api, app with hot reload on http://127.0.0.1:5173`);
 

@@ -27,7 +27,9 @@ async function main() {
   migrateAndSeed(databaseEnv().DB_NAME);
   buildClient();
 
-  const { DEMO_COMPANY_NAME, DEMO_USERS } = createRequire(import.meta.url)('../server/dist/seed/demo-data.js');
+  const { DEMO_COMPANY_NAME, DEMO_USERS } = createRequire(import.meta.url)(
+    '../server/dist/seed/demo-data.js',
+  );
   const { child, url } = await startServer({ port, host, databaseName: databaseEnv().DB_NAME });
   console.log(`
   Pondwright is running at ${url}
@@ -46,7 +48,8 @@ ${DEMO_USERS.map((person) => `    ${person.role.padEnd(10)} ${person.email.padEn
     stopping = true;
     log('stopping...');
     await stopProcess(child);
-    if (!databaseWasRunning) run('bash', ['scripts/db.sh', 'stop'], { env: { ...process.env, ...databaseEnv() } });
+    if (!databaseWasRunning)
+      run('bash', ['scripts/db.sh', 'stop'], { env: { ...process.env, ...databaseEnv() } });
     process.exit(0);
   };
   process.on('SIGINT', shutdown);

@@ -42,7 +42,14 @@ function vitestSuite(name, workspace, extraArgs = [], env = {}) {
   rmSync(reportFile, { force: true });
   const ok = tryRun(
     'npx',
-    ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${reportFile}`, ...extraArgs],
+    [
+      'vitest',
+      'run',
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${reportFile}`,
+      ...extraArgs,
+    ],
     { cwd: join(repoRoot, workspace), env: { ...process.env, ...env } },
   );
   if (!existsSync(reportFile)) {
@@ -70,7 +77,9 @@ async function endToEnd() {
       quiet: true,
       extraEnv: { LOG_LEVEL: 'warn', PUBLIC_APP_URL: `http://127.0.0.1:${port}` },
     });
-    vitestSuite('end-to-end', 'client', ['--config', 'vitest.e2e.config.ts'], { E2E_BASE_URL: server.url });
+    vitestSuite('end-to-end', 'client', ['--config', 'vitest.e2e.config.ts'], {
+      E2E_BASE_URL: server.url,
+    });
   } catch (error) {
     log(`end-to-end set-up failed: ${error.message}`);
     record('end-to-end', 0, 1);

@@ -16,7 +16,9 @@ export function log(message) {
 export function run(command, args, options = {}) {
   const result = spawnSync(command, args, { cwd: repoRoot, stdio: 'inherit', ...options });
   if (result.status !== 0) {
-    throw new Error(`${command} ${args.join(' ')} failed with exit code ${result.status ?? result.signal}`);
+    throw new Error(
+      `${command} ${args.join(' ')} failed with exit code ${result.status ?? result.signal}`,
+    );
   }
 }
 
@@ -94,7 +96,13 @@ export function migrateAndSeed(databaseName) {
 }
 
 /** Starts the built server as a child process; resolves once /api/health answers. */
-export async function startServer({ port, host = '127.0.0.1', databaseName, extraEnv = {}, quiet = false }) {
+export async function startServer({
+  port,
+  host = '127.0.0.1',
+  databaseName,
+  extraEnv = {},
+  quiet = false,
+}) {
   const env = {
     ...process.env,
     ...databaseEnv(),

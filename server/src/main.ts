@@ -10,7 +10,9 @@ async function bootstrap(): Promise<void> {
   configureApp(app);
   const config = app.get(AppConfig);
   await app.listen(config.port, config.host);
-  console.log(`[server] Pondwright listens on http://${config.host}:${config.port} (API under /api, docs at /api/docs)`);
+  console.log(
+    `[server] Pondwright listens on http://${config.host}:${config.port} (API under /api, docs at /api/docs)`,
+  );
 }
 
 bootstrap().catch((error: unknown) => {

@@ -21,7 +21,11 @@ afterAll(async () => {
 });
 
 function login(email: string, password: string, ip = randomIp()) {
-  return testApp.http().post('/api/auth/login').set('X-Forwarded-For', ip).send({ email, password });
+  return testApp
+    .http()
+    .post('/api/auth/login')
+    .set('X-Forwarded-For', ip)
+    .send({ email, password });
 }
 
 describe('sign-up', () => {
@@ -33,19 +37,32 @@ describe('sign-up', () => {
       .send({ companyName: 'Cattail Creek Ponds', name: 'Founder', email, password: GOOD_PASSWORD })
       .expect(201);
     expect(Object.keys(response.body)).toEqual(['accessToken']);
-    const cookie = ([] as string[]).concat(response.headers['set-cookie'] ?? []).find((c) => c.startsWith('pw_refresh='))!;
+    const cookie = ([] as string[])
+      .concat(response.headers['set-cookie'] ?? [])
+      .find((c) => c.startsWith('pw_refresh='))!;
     expect(cookie).toMatch(/HttpOnly/);
     expect(cookie).toMatch(/SameSite=Strict/);
     expect(cookie).toMatch(/Path=\/api\/auth/);
 
-    const me = await testApp.http().get('/api/auth/me').set(...bearer(response.body)).expect(200);
-    expect(me.body).toMatchObject({ email, name: 'Founder', role: 'owner', companyName: 'Cattail Creek Ponds' });
+    const me = await testApp
+      .http()
+      .get('/api/auth/me')
+      .set(...bearer(response.body))
+      .expect(200);
+    expect(me.body).toMatchObject({
+      email,
+      name: 'Founder',
+      role: 'owner',
+      companyName: 'Cattail Creek Ponds',
+    });
     expect(me.body).not.toHaveProperty('passwordHash');
   });
 
   it('stores the password as a bcrypt hash of cost 12', async () => {
     const owner = await signupCompany(testApp);
-    const [row] = await testApp.dataSource.query('SELECT password_hash FROM users WHERE id = $1', [owner.userId]);
+    const [row] = await testApp.dataSource.query('SELECT password_hash FROM users WHERE id = $1', [
+      owner.userId,
+    ]);
     // bcrypt's modular crypt format: $2a$/$2b$, then the cost (OWASP Password Storage Cheat Sheet).
     expect(row.password_hash).toMatch(/^\$2[ab]\$12\$/);
   });
@@ -56,7 +73,12 @@ describe('sign-up', () => {
     const response = await testApp
       .http()
       .post('/api/auth/signup')
-      .send({ companyName: 'Second Try Ponds', name: 'Again', email: owner.email.toUpperCase(), password: GOOD_PASSWORD })
+      .send({
+        companyName: 'Second Try Ponds',
+        name: 'Again',
+        email: owner.email.toUpperCase(),
+        password: GOOD_PASSWORD,
+      })
       .expect(409);
     expect(response.body).toMatchObject({ statusCode: 409, error: 'Conflict' });
     const after = await testApp.dataSource.query('SELECT count(*)::int AS n FROM companies');
@@ -67,7 +89,13 @@ describe('sign-up', () => {
     const response = await testApp
       .http()
       .post('/api/auth/signup')
-      .send({ companyName: '', name: 'A', email: 'not-an-email', password: 'short', companyId: 'x' })
+      .send({
+        companyName: '',
+        name: 'A',
+        email: 'not-an-email',
+        password: 'short',
+        companyId: 'x',
+      })
       .expect(400);
     const fields = (response.body.details as Array<{ field: string }>).map((d) => d.field).sort();
     expect(fields).toEqual(['companyId', 'companyName', 'email', 'password']);
@@ -78,9 +106,16 @@ describe('sign-up', () => {
     const response = await testApp
       .http()
       .post('/api/auth/signup')
-      .send({ companyName: 'Common Ponds', name: 'Someone', email: uniqueEmail(), password: 'password123' })
+      .send({
+        companyName: 'Common Ponds',
+        name: 'Someone',
+        email: uniqueEmail(),
+        password: 'password123',
+      })
       .expect(400);
-    expect(response.body.details).toEqual([{ field: 'password', message: expect.stringMatching(/too common/) }]);
+    expect(response.body.details).toEqual([
+      { field: 'password', message: expect.stringMatching(/too common/) },
+    ]);
   });
 
   it('accepts a 64-character password with no composition rules (NIST SP 800-63B)', async () => {
@@ -140,7 +175,10 @@ describe('sign-in', () => {
 describe('access tokens', () => {
   it('are HS256 JWTs with issuer, audience and an expiry of 15 minutes or less', async () => {
     const owner = await signupCompany(testApp);
-    const [header, payload] = owner.accessToken.split('.').slice(0, 2).map((part) => JSON.parse(Buffer.from(part, 'base64url').toString() || '{}'));
+    const [header, payload] = owner.accessToken
+      .split('.')
+      .slice(0, 2)
+      .map((part) => JSON.parse(Buffer.from(part, 'base64url').toString() || '{}'));
     expect(header.alg).toBe('HS256');
     expect(payload).toMatchObject({ iss: 'pondwright', aud: 'pondwright-api', role: 'owner' });
     expect(payload.exp - payload.iat).toBeLessThanOrEqual(15 * 60);
@@ -169,7 +207,11 @@ describe('access tokens', () => {
 describe('refresh tokens', () => {
   it('rotate on every use, and reusing an old one revokes the whole family', async () => {
     const owner = await signupCompany(testApp);
-    const first = await testApp.http().post('/api/auth/refresh').set('Cookie', owner.refreshCookie).expect(200);
+    const first = await testApp
+      .http()
+      .post('/api/auth/refresh')
+      .set('Cookie', owner.refreshCookie)
+      .expect(200);
     const second = refreshCookieOf(first);
     expect(second).not.toBe(owner.refreshCookie);
 

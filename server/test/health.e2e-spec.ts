@@ -4,7 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from './support/test-app';
 
 const dbScript = resolve(__dirname, '../../scripts/db.sh');
-const db = (command: 'start' | 'stop') => execFileSync('bash', [dbScript, command], { stdio: 'pipe' });
+const db = (command: 'start' | 'stop') =>
+  execFileSync('bash', [dbScript, command], { stdio: 'pipe' });
 
 let testApp: TestApp;
 

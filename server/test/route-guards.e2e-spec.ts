@@ -40,8 +40,10 @@ describe('every route', () => {
         if (Reflect.getMetadata('path', handler) === undefined) continue;
         routeCount++;
         const name = `${controller.name}.${method}`;
-        if (reflector.getAllAndOverride<boolean>(PUBLIC_KEY, [handler, controller])) publicRoutes.push(name);
-        else if (!reflector.getAllAndOverride<string[]>(ROLES_KEY, [handler, controller])?.length) unguarded.push(name);
+        if (reflector.getAllAndOverride<boolean>(PUBLIC_KEY, [handler, controller]))
+          publicRoutes.push(name);
+        else if (!reflector.getAllAndOverride<string[]>(ROLES_KEY, [handler, controller])?.length)
+          unguarded.push(name);
       }
     }
 

@@ -27,8 +27,14 @@ export class AuthController {
 
   @Public()
   @Post('signup')
-  @ApiCreatedResponse({ type: AccessTokenDto, description: 'Company and owner created; refresh cookie set' })
-  async signup(@Body() body: SignupDto, @Res({ passthrough: true }) response: Response): Promise<AccessTokenDto> {
+  @ApiCreatedResponse({
+    type: AccessTokenDto,
+    description: 'Company and owner created; refresh cookie set',
+  })
+  async signup(
+    @Body() body: SignupDto,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<AccessTokenDto> {
     return this.respond(response, await this.auth.signup(body));
   }
 
@@ -47,8 +53,14 @@ export class AuthController {
   @Public()
   @Post('refresh')
   @HttpCode(200)
-  @ApiOkResponse({ type: AccessTokenDto, description: 'Uses the refresh cookie once and sets its successor' })
-  async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<AccessTokenDto> {
+  @ApiOkResponse({
+    type: AccessTokenDto,
+    description: 'Uses the refresh cookie once and sets its successor',
+  })
+  async refresh(
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<AccessTokenDto> {
     try {
       return this.respond(response, await this.auth.refresh(readRefreshCookie(request)));
     } catch (error) {
@@ -60,7 +72,10 @@ export class AuthController {
   @Public()
   @Post('logout')
   @HttpCode(204)
-  async logout(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<void> {
+  async logout(
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<void> {
     await this.auth.logout(readRefreshCookie(request));
     clearRefreshCookie(response, this.config.isProduction);
   }
@@ -75,7 +90,10 @@ export class AuthController {
 
   @Public()
   @Get('invites/:token')
-  @ApiOkResponse({ type: InvitePreviewDto, description: '404 unknown token, 410 expired, used or revoked' })
+  @ApiOkResponse({
+    type: InvitePreviewDto,
+    description: '404 unknown token, 410 expired, used or revoked',
+  })
   previewInvite(@Param('token') token: string): Promise<InvitePreview> {
     return this.invites.preview(token);
   }
@@ -91,7 +109,12 @@ export class AuthController {
   }
 
   private respond(response: Response, session: Session): AccessTokenDto {
-    setRefreshCookie(response, session.refresh.token, session.refresh.expiresAt, this.config.isProduction);
+    setRefreshCookie(
+      response,
+      session.refresh.token,
+      session.refresh.expiresAt,
+      this.config.isProduction,
+    );
     return { accessToken: session.accessToken };
   }
 }

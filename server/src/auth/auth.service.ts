@@ -38,7 +38,13 @@ export class AuthService {
       await this.assertEmailFree(manager, input.email);
       const company = await manager.save(manager.create(Company, { name: input.companyName }));
       const user = await manager.save(
-        manager.create(User, { companyId: company.id, email: input.email, name: input.name, role: 'owner', passwordHash }),
+        manager.create(User, {
+          companyId: company.id,
+          email: input.email,
+          name: input.name,
+          role: 'owner',
+          passwordHash,
+        }),
       );
       return this.startSession(user, manager);
     });
@@ -59,7 +65,10 @@ export class AuthService {
     }
     await this.loginThrottle.clearAccount(email);
     if (!user.active) {
-      throw new AppError('ACCOUNT_DEACTIVATED', "This account has been deactivated. Ask your company's owner.");
+      throw new AppError(
+        'ACCOUNT_DEACTIVATED',
+        "This account has been deactivated. Ask your company's owner.",
+      );
     }
     return this.startSession(user);
   }
@@ -81,8 +90,12 @@ export class AuthService {
   }
 
   async me(userId: string): Promise<CurrentUser> {
-    const user = await this.dataSource.manager.findOne(User, { where: { id: userId }, relations: { company: true } });
-    if (!user?.company) throw new AppError('SESSION_EXPIRED', 'Your session has ended. Please sign in again.');
+    const user = await this.dataSource.manager.findOne(User, {
+      where: { id: userId },
+      relations: { company: true },
+    });
+    if (!user?.company)
+      throw new AppError('SESSION_EXPIRED', 'Your session has ended. Please sign in again.');
     return {
       id: user.id,
       email: user.email,
@@ -114,9 +127,11 @@ export class AuthService {
 
   private async assertEmailFree(manager: EntityManager, email: string): Promise<void> {
     if (await manager.existsBy(User, { email })) {
-      throw new AppError('EMAIL_TAKEN', 'An account with this e-mail already exists. Sign in instead.', [
-        { field: 'email', message: 'An account with this e-mail already exists' },
-      ]);
+      throw new AppError(
+        'EMAIL_TAKEN',
+        'An account with this e-mail already exists. Sign in instead.',
+        [{ field: 'email', message: 'An account with this e-mail already exists' }],
+      );
     }
   }
 
@@ -127,6 +142,10 @@ export class AuthService {
 
   private signAccessToken(user: User): Promise<string> {
     const claims: AccessTokenClaims = { sub: user.id, cid: user.companyId, role: user.role };
-    return this.jwt.signAsync(claims, { algorithm: JWT_ALGORITHM, issuer: JWT_ISSUER, audience: JWT_AUDIENCE });
+    return this.jwt.signAsync(claims, {
+      algorithm: JWT_ALGORITHM,
+      issuer: JWT_ISSUER,
+      audience: JWT_AUDIENCE,
+    });
   }
 }

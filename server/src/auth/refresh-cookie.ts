@@ -7,7 +7,12 @@ function cookieOptions(secure: boolean): CookieOptions {
   return { httpOnly: true, sameSite: 'strict', secure, path: '/api/auth' };
 }
 
-export function setRefreshCookie(response: Response, token: string, expiresAt: Date, secure: boolean): void {
+export function setRefreshCookie(
+  response: Response,
+  token: string,
+  expiresAt: Date,
+  secure: boolean,
+): void {
   response.cookie(REFRESH_COOKIE, token, { ...cookieOptions(secure), expires: expiresAt });
 }
 

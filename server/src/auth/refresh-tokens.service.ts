@@ -22,7 +22,10 @@ export class RefreshTokensService {
   ) {}
 
   /** Starts a new family for a fresh sign-in. */
-  issue(userId: string, manager: EntityManager = this.dataSource.manager): Promise<IssuedRefreshToken> {
+  issue(
+    userId: string,
+    manager: EntityManager = this.dataSource.manager,
+  ): Promise<IssuedRefreshToken> {
     return this.insert(manager, userId, randomUUID());
   }
 
@@ -34,7 +37,8 @@ export class RefreshTokensService {
         lock: { mode: 'pessimistic_write' },
       });
       if (!current) return { kind: 'unknown' as const };
-      if (current.usedAt || current.revokedAt) return { kind: 'reused' as const, familyId: current.familyId };
+      if (current.usedAt || current.revokedAt)
+        return { kind: 'reused' as const, familyId: current.familyId };
       if (current.expiresAt.getTime() <= Date.now()) return { kind: 'expired' as const };
       current.usedAt = new Date();
       await manager.save(current);
@@ -48,23 +52,41 @@ export class RefreshTokensService {
 
   /** Sign-out: the family of the presented token ends. Unknown tokens are ignored. */
   async revokeByToken(presented: string): Promise<void> {
-    const token = await this.dataSource.manager.findOneBy(RefreshToken, { tokenHash: hashToken(presented) });
+    const token = await this.dataSource.manager.findOneBy(RefreshToken, {
+      tokenHash: hashToken(presented),
+    });
     if (token) await this.revokeFamily(token.familyId);
   }
 
   async revokeFamily(familyId: string): Promise<void> {
-    await this.dataSource.manager.update(RefreshToken, { familyId, revokedAt: IsNull() }, { revokedAt: new Date() });
+    await this.dataSource.manager.update(
+      RefreshToken,
+      { familyId, revokedAt: IsNull() },
+      { revokedAt: new Date() },
+    );
   }
 
   /** Deactivation and role changes end every session of the user. */
-  async revokeAllForUser(userId: string, manager: EntityManager = this.dataSource.manager): Promise<void> {
+  async revokeAllForUser(
+    userId: string,
+    manager: EntityManager = this.dataSource.manager,
+  ): Promise<void> {
     await manager.update(RefreshToken, { userId, revokedAt: IsNull() }, { revokedAt: new Date() });
   }
 
-  private async insert(manager: EntityManager, userId: string, familyId: string): Promise<IssuedRefreshToken> {
+  private async insert(
+    manager: EntityManager,
+    userId: string,
+    familyId: string,
+  ): Promise<IssuedRefreshToken> {
     const token = newSecureToken();
     const expiresAt = new Date(Date.now() + this.config.refreshTtlDays * 24 * 3600 * 1000);
-    await manager.insert(RefreshToken, { userId, familyId, tokenHash: hashToken(token), expiresAt });
+    await manager.insert(RefreshToken, {
+      userId,
+      familyId,
+      tokenHash: hashToken(token),
+      expiresAt,
+    });
     return { token, expiresAt };
   }
 }

@@ -12,27 +12,35 @@ export const databaseEnvSchema = z.object({
 });
 
 export const envSchema = databaseEnvSchema.extend({
-    NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
-    HOST: z.string().min(1).default('127.0.0.1'),
-    PORT: z.coerce.number().int().min(1).max(65535).default(3000),
-    PUBLIC_APP_URL: z.url().optional(),
-    TRUST_PROXY: z
-      .enum(['true', 'false'])
-      .default('false')
-      .transform((value) => value === 'true'),
-    // HS256 needs a key at least as long as its output: 256 bits (RFC 7518 §3.2).
-    JWT_SECRET: z
-      .string({ error: 'JWT_SECRET is required (at least 32 bytes of random data)' })
-      .refine((secret) => Buffer.byteLength(secret, 'utf8') >= 32, 'JWT_SECRET must be at least 32 bytes (256 bits)')
-      .refine((secret) => new Set(secret).size >= 10, 'JWT_SECRET looks weak: use random data'),
-    JWT_ACCESS_TTL_SECONDS: z.coerce.number().int().min(30).max(900).default(900),
-    REFRESH_TTL_DAYS: z.coerce.number().int().min(1).max(90).default(14),
-    INVITE_TTL_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(72),
-    LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(10),
-    LOGIN_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
-    RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
-    CLIENT_DIST_DIR: z.string().optional(),
-    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().min(1).default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  PUBLIC_APP_URL: z.url().optional(),
+  TRUST_PROXY: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((value) => value === 'true'),
+  // HS256 needs a key at least as long as its output: 256 bits (RFC 7518 §3.2).
+  JWT_SECRET: z
+    .string({ error: 'JWT_SECRET is required (at least 32 bytes of random data)' })
+    .refine(
+      (secret) => Buffer.byteLength(secret, 'utf8') >= 32,
+      'JWT_SECRET must be at least 32 bytes (256 bits)',
+    )
+    .refine((secret) => new Set(secret).size >= 10, 'JWT_SECRET looks weak: use random data'),
+  JWT_ACCESS_TTL_SECONDS: z.coerce.number().int().min(30).max(900).default(900),
+  REFRESH_TTL_DAYS: z.coerce.number().int().min(1).max(90).default(14),
+  INVITE_TTL_HOURS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 30)
+    .default(72),
+  LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(10),
+  LOGIN_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
+  CLIENT_DIST_DIR: z.string().optional(),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -51,7 +59,9 @@ export function validateDatabaseEnv(raw: Record<string, unknown>): DatabaseEnv {
 function parseOrThrow<T extends z.ZodType>(schema: T, raw: Record<string, unknown>): z.infer<T> {
   const result = schema.safeParse(raw);
   if (!result.success) {
-    const lines = result.error.issues.map((issue) => `  - ${issue.path.join('.') || '(env)'}: ${issue.message}`);
+    const lines = result.error.issues.map(
+      (issue) => `  - ${issue.path.join('.') || '(env)'}: ${issue.message}`,
+    );
     throw new Error(`Invalid server configuration:\n${lines.join('\n')}`);
   }
   return result.data;

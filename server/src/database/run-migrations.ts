@@ -6,7 +6,9 @@ import { databaseSettingsFromEnv, dataSourceOptions } from './data-source-option
 /** `npm run migrate -w server`: applies every pending migration to the configured database. */
 async function main(): Promise<void> {
   const env = validateDatabaseEnv(process.env);
-  const dataSource = new DataSource(dataSourceOptions({ ...databaseSettingsFromEnv(env), poolSize: 2 }));
+  const dataSource = new DataSource(
+    dataSourceOptions({ ...databaseSettingsFromEnv(env), poolSize: 2 }),
+  );
   await dataSource.initialize();
   try {
     const applied = await dataSource.runMigrations({ transaction: 'each' });

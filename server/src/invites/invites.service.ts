@@ -36,9 +36,11 @@ export class InvitesService {
   /** A fresh invite replaces any earlier pending one for the same e-mail. */
   async create(input: CreateInviteDto, invitedById: string): Promise<CreatedInvite> {
     if (await this.dataSource.manager.existsBy(User, { email: input.email })) {
-      throw new AppError('EMAIL_TAKEN', 'Someone with this e-mail already has a Pondwright account.', [
-        { field: 'email', message: 'This e-mail already has an account' },
-      ]);
+      throw new AppError(
+        'EMAIL_TAKEN',
+        'Someone with this e-mail already has a Pondwright account.',
+        [{ field: 'email', message: 'This e-mail already has an account' }],
+      );
     }
     const token = newSecureToken();
     const invite = this.invites.create({
@@ -51,7 +53,12 @@ export class InvitesService {
     const saved = await this.dataSource.transaction(async (manager) => {
       await manager.update(
         Invite,
-        { companyId: invite.companyId, email: input.email, acceptedAt: IsNull(), revokedAt: IsNull() },
+        {
+          companyId: invite.companyId,
+          email: input.email,
+          acceptedAt: IsNull(),
+          revokedAt: IsNull(),
+        },
         { revokedAt: new Date() },
       );
       return this.invites.save(invite, manager);
@@ -95,9 +102,12 @@ export class InvitesService {
       query.leftJoinAndSelect('invite.company', 'company');
     }
     const invite = await query.getOne();
-    if (!invite) throw new AppError('INVITE_NOT_FOUND', 'This invite link is not valid. Ask for a new one.');
-    if (invite.acceptedAt) throw new AppError('INVITE_EXPIRED', 'This invite has already been used. Sign in instead.');
-    if (invite.revokedAt) throw new AppError('INVITE_EXPIRED', 'This invite was withdrawn. Ask for a new one.');
+    if (!invite)
+      throw new AppError('INVITE_NOT_FOUND', 'This invite link is not valid. Ask for a new one.');
+    if (invite.acceptedAt)
+      throw new AppError('INVITE_EXPIRED', 'This invite has already been used. Sign in instead.');
+    if (invite.revokedAt)
+      throw new AppError('INVITE_EXPIRED', 'This invite was withdrawn. Ask for a new one.');
     if (invite.expiresAt.getTime() <= Date.now()) {
       throw new AppError('INVITE_EXPIRED', 'This invite has expired. Ask for a new one.');
     }

@@ -6,8 +6,28 @@ import type { Role } from '@pondwright/shared';
  */
 export const DEMO_COMPANY_NAME = 'Heronmoss Water Gardens';
 
-export const DEMO_USERS: ReadonlyArray<{ email: string; name: string; role: Role; password: string }> = [
-  { email: 'owner@heronmoss.example', name: 'Ada Quillfeather', role: 'owner', password: 'pond-owner-2026' },
-  { email: 'estimator@heronmoss.example', name: 'Tomas Reedley', role: 'estimator', password: 'pond-estimator-2026' },
-  { email: 'crew@heronmoss.example', name: 'Marisol Fenwick', role: 'crew_lead', password: 'pond-crew-2026' },
+export const DEMO_USERS: ReadonlyArray<{
+  email: string;
+  name: string;
+  role: Role;
+  password: string;
+}> = [
+  {
+    email: 'owner@heronmoss.example',
+    name: 'Ada Quillfeather',
+    role: 'owner',
+    password: 'pond-owner-2026',
+  },
+  {
+    email: 'estimator@heronmoss.example',
+    name: 'Tomas Reedley',
+    role: 'estimator',
+    password: 'pond-estimator-2026',
+  },
+  {
+    email: 'crew@heronmoss.example',
+    name: 'Marisol Fenwick',
+    role: 'crew_lead',
+    password: 'pond-crew-2026',
+  },
 ];

@@ -7,11 +7,15 @@ import { seedDemo } from './seed-demo';
 /** `npm run seed -w server`: adds the demo company when it is missing. */
 async function main(): Promise<void> {
   const env = validateDatabaseEnv(process.env);
-  const dataSource = new DataSource(dataSourceOptions({ ...databaseSettingsFromEnv(env), poolSize: 2 }));
+  const dataSource = new DataSource(
+    dataSourceOptions({ ...databaseSettingsFromEnv(env), poolSize: 2 }),
+  );
   await dataSource.initialize();
   try {
     const { created } = await seedDemo(dataSource);
-    console.log(created.length ? `[seed] added ${created.join(', ')}` : '[seed] demo data already present');
+    console.log(
+      created.length ? `[seed] added ${created.join(', ')}` : '[seed] demo data already present',
+    );
   } finally {
     await dataSource.destroy();
   }

@@ -40,7 +40,9 @@ export class UsersService {
   async update(id: string, change: UpdateUserDto): Promise<TeamMember> {
     const user = await this.users.getById(id, 'Team member');
     const losesOwner =
-      user.role === 'owner' && user.active && ((change.role && change.role !== 'owner') || change.active === false);
+      user.role === 'owner' &&
+      user.active &&
+      ((change.role && change.role !== 'owner') || change.active === false);
     const updated = await this.dataSource.transaction(async (manager) => {
       if (losesOwner) await this.assertAnotherActiveOwner(manager, user.id);
       if (change.role) user.role = change.role;
@@ -52,7 +54,10 @@ export class UsersService {
     return toTeamMember(updated);
   }
 
-  private async assertAnotherActiveOwner(manager: EntityManager, leavingUserId: string): Promise<void> {
+  private async assertAnotherActiveOwner(
+    manager: EntityManager,
+    leavingUserId: string,
+  ): Promise<void> {
     const owners = (await manager.query(
       `SELECT id FROM users WHERE company_id = $1 AND role = 'owner' AND active FOR UPDATE`,
       [this.tenant.companyId],

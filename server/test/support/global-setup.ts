@@ -10,7 +10,9 @@ export async function setup(): Promise<void> {
     DB_NAME: process.env.DB_TEST_NAME ?? 'pondwright_test',
     DB_PASSWORD: process.env.DB_PASSWORD ?? 'pondwright',
   });
-  const dataSource = new DataSource(dataSourceOptions({ ...databaseSettingsFromEnv(env), poolSize: 1 }));
+  const dataSource = new DataSource(
+    dataSourceOptions({ ...databaseSettingsFromEnv(env), poolSize: 1 }),
+  );
   await dataSource.initialize();
   try {
     await dataSource.query('DROP SCHEMA public CASCADE');

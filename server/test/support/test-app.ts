@@ -39,7 +39,12 @@ export function uniqueEmail(label = 'person'): string {
 
 export const GOOD_PASSWORD = 'lily-pad-granite-42';
 
-export type SignedIn = { accessToken: string; refreshCookie: string; email: string; password: string };
+export type SignedIn = {
+  accessToken: string;
+  refreshCookie: string;
+  email: string;
+  password: string;
+};
 
 /** Signs up a new company and returns its owner's session. */
 export async function signupCompany(
@@ -52,8 +57,17 @@ export async function signupCompany(
     email: overrides.email ?? uniqueEmail('owner'),
     password: overrides.password ?? GOOD_PASSWORD,
   };
-  const response = await testApp.http().post('/api/auth/signup').set('X-Forwarded-For', randomIp()).send(body).expect(201);
-  const me = await testApp.http().get('/api/auth/me').set('Authorization', `Bearer ${response.body.accessToken}`).expect(200);
+  const response = await testApp
+    .http()
+    .post('/api/auth/signup')
+    .set('X-Forwarded-For', randomIp())
+    .send(body)
+    .expect(201);
+  const me = await testApp
+    .http()
+    .get('/api/auth/me')
+    .set('Authorization', `Bearer ${response.body.accessToken}`)
+    .expect(200);
   return {
     accessToken: response.body.accessToken as string,
     refreshCookie: refreshCookieOf(response),
@@ -83,7 +97,11 @@ export async function addMember(
     .post('/api/auth/accept-invite')
     .send({ token, name: `Member ${role}`, password: GOOD_PASSWORD })
     .expect(201);
-  const me = await testApp.http().get('/api/auth/me').set('Authorization', `Bearer ${accepted.body.accessToken}`).expect(200);
+  const me = await testApp
+    .http()
+    .get('/api/auth/me')
+    .set('Authorization', `Bearer ${accepted.body.accessToken}`)
+    .expect(200);
   return {
     accessToken: accepted.body.accessToken as string,
     refreshCookie: refreshCookieOf(accepted),

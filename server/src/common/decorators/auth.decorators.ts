@@ -22,8 +22,10 @@ export type Principal = {
   email: string;
 };
 
-export const CurrentUser = createParamDecorator((_data: unknown, context: ExecutionContext): Principal => {
-  const request = context.switchToHttp().getRequest<Request & { user?: Principal }>();
-  if (!request.user) throw new Error('CurrentUser used on a route without authentication');
-  return request.user;
-});
+export const CurrentUser = createParamDecorator(
+  (_data: unknown, context: ExecutionContext): Principal => {
+    const request = context.switchToHttp().getRequest<Request & { user?: Principal }>();
+    if (!request.user) throw new Error('CurrentUser used on a route without authentication');
+    return request.user;
+  },
+);

@@ -1,4 +1,11 @@
-import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import {
+  ArgumentsHost,
+  Catch,
+  ExceptionFilter,
+  HttpException,
+  HttpStatus,
+  Logger,
+} from '@nestjs/common';
 import type { ApiErrorBody } from '@pondwright/shared';
 import type { Response } from 'express';
 import { STATUS_CODES } from 'node:http';
@@ -15,7 +22,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const response = host.switchToHttp().getResponse<Response>();
     const body = this.toBody(exception);
     if (body.statusCode >= 500) {
-      this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+      this.logger.error(
+        exception instanceof Error ? (exception.stack ?? exception.message) : String(exception),
+      );
     }
     if (response.headersSent) return;
     response.status(body.statusCode).json(body);
@@ -30,7 +39,11 @@ export class ApiExceptionFilter implements ExceptionFilter {
       const payload = exception.getResponse();
       if (typeof payload === 'object' && payload !== null) {
         const { message, details } = payload as { message?: unknown; details?: FieldDetail[] };
-        const text = Array.isArray(message) ? message.join('; ') : typeof message === 'string' ? message : exception.message;
+        const text = Array.isArray(message)
+          ? message.join('; ')
+          : typeof message === 'string'
+            ? message
+            : exception.message;
         return this.body(status, text, details);
       }
       return this.body(status, String(payload));
@@ -41,7 +54,11 @@ export class ApiExceptionFilter implements ExceptionFilter {
     }
     // body-parser's errors carry an HTTP status and a type; a syntax error in the JSON is the client's.
     const parserError = exception as { status?: number; type?: string };
-    if (typeof parserError?.status === 'number' && parserError.status >= 400 && parserError.status < 500) {
+    if (
+      typeof parserError?.status === 'number' &&
+      parserError.status >= 400 &&
+      parserError.status < 500
+    ) {
       if (parserError.type === 'entity.parse.failed') {
         return this.body(HttpStatus.BAD_REQUEST, 'The request body is not valid JSON');
       }
@@ -50,10 +67,18 @@ export class ApiExceptionFilter implements ExceptionFilter {
       }
       return this.body(parserError.status, STATUS_CODES[parserError.status] ?? 'Bad request');
     }
-    return this.body(HttpStatus.INTERNAL_SERVER_ERROR, 'Something went wrong on our side. Please try again.');
+    return this.body(
+      HttpStatus.INTERNAL_SERVER_ERROR,
+      'Something went wrong on our side. Please try again.',
+    );
   }
 
-  private body(statusCode: number, message: string, details?: FieldDetail[], code?: string): ApiErrorBody {
+  private body(
+    statusCode: number,
+    message: string,
+    details?: FieldDetail[],
+    code?: string,
+  ): ApiErrorBody {
     const body: ApiErrorBody & { code?: string } = {
       statusCode,
       error: STATUS_CODES[statusCode] ?? 'Error',

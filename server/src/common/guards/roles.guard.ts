@@ -1,4 +1,10 @@
-import { CanActivate, ExecutionContext, ForbiddenException, Injectable, Logger } from '@nestjs/common';
+import {
+  CanActivate,
+  ExecutionContext,
+  ForbiddenException,
+  Injectable,
+  Logger,
+} from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import type { Role } from '@pondwright/shared';
 import type { Request } from 'express';
@@ -19,7 +25,9 @@ export class RolesGuard implements CanActivate {
     if (this.reflector.getAllAndOverride<boolean>(PUBLIC_KEY, targets)) return true;
     const roles = this.reflector.getAllAndOverride<Role[] | undefined>(ROLES_KEY, targets);
     if (!roles?.length) {
-      this.logger.error(`Route ${context.getClass().name}.${context.getHandler().name} declares no roles`);
+      this.logger.error(
+        `Route ${context.getClass().name}.${context.getHandler().name} declares no roles`,
+      );
       throw new ForbiddenException('This route is not open to any role');
     }
     const user = context.switchToHttp().getRequest<Request & { user?: Principal }>().user;

@@ -17,8 +17,11 @@ export class TenantContext {
 
   /** The current company; a programming error (500) if a scoped query runs outside an authenticated request. */
   get companyId(): string {
-    const companyId = this.cls.isActive() ? this.cls.get<string | undefined>(COMPANY_KEY) : undefined;
-    if (!companyId) throw new Error('A company-scoped query ran without a company in the request context');
+    const companyId = this.cls.isActive()
+      ? this.cls.get<string | undefined>(COMPANY_KEY)
+      : undefined;
+    if (!companyId)
+      throw new Error('A company-scoped query ran without a company in the request context');
     return companyId;
   }
 

@@ -29,7 +29,10 @@ export class TenantRepository<T extends CompanyOwned> {
   }
 
   find(options: FindManyOptions<T> = {}): Promise<T[]> {
-    return this.repository.find({ ...options, where: this.scope(options.where as FindOptionsWhere<T>) });
+    return this.repository.find({
+      ...options,
+      where: this.scope(options.where as FindOptionsWhere<T>),
+    });
   }
 
   count(where?: FindOptionsWhere<T>): Promise<number> {
@@ -42,7 +45,9 @@ export class TenantRepository<T extends CompanyOwned> {
 
   /** The row with this id in the current company, or a 404 naming what was looked for. */
   async getById(id: string, what: string): Promise<T> {
-    const found = isUuid(id) ? await this.findOneBy({ id } as unknown as FindOptionsWhere<T>) : null;
+    const found = isUuid(id)
+      ? await this.findOneBy({ id } as unknown as FindOptionsWhere<T>)
+      : null;
     if (!found) throw new AppError('NOT_FOUND', `${what} not found`);
     return found;
   }

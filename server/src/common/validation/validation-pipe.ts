@@ -1,7 +1,10 @@
 import { BadRequestException, ValidationError, ValidationPipe } from '@nestjs/common';
 
 /** Flattens class-validator's tree into one message per field, named by its dotted path. */
-export function fieldDetails(errors: ValidationError[], parent = ''): Array<{ field: string; message: string }> {
+export function fieldDetails(
+  errors: ValidationError[],
+  parent = '',
+): Array<{ field: string; message: string }> {
   return errors.flatMap((error) => {
     const field = parent ? `${parent}.${error.property}` : error.property;
     const own = error.constraints ? Object.values(error.constraints) : [];

@@ -1,4 +1,8 @@
-import { registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
+import {
+  registerDecorator,
+  type ValidationArguments,
+  type ValidationOptions,
+} from 'class-validator';
 import { Transform } from 'class-transformer';
 import type { z } from 'zod';
 
@@ -23,7 +27,9 @@ export function MatchesSchema(schema: z.ZodType, options?: ValidationOptions): P
         validate: (value: unknown) => schema.safeParse(value).success,
         defaultMessage: (args: ValidationArguments) => {
           const result = schema.safeParse(args.value);
-          return result.success ? '' : (result.error.issues[0]?.message ?? `${args.property} is not valid`);
+          return result.success
+            ? ''
+            : (result.error.issues[0]?.message ?? `${args.property} is not valid`);
         },
       },
     });

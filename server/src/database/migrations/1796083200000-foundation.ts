@@ -51,7 +51,9 @@ export class Foundation1796083200000 implements MigrationInterface {
         revoked_at timestamptz,
         created_at timestamptz NOT NULL DEFAULT now()
       )`);
-    await queryRunner.query(`CREATE UNIQUE INDEX refresh_tokens_hash_key ON refresh_tokens (token_hash)`);
+    await queryRunner.query(
+      `CREATE UNIQUE INDEX refresh_tokens_hash_key ON refresh_tokens (token_hash)`,
+    );
     await queryRunner.query(`CREATE INDEX refresh_tokens_family_idx ON refresh_tokens (family_id)`);
     await queryRunner.query(`CREATE INDEX refresh_tokens_user_idx ON refresh_tokens (user_id)`);
     await queryRunner.query(`
@@ -61,8 +63,12 @@ export class Foundation1796083200000 implements MigrationInterface {
         ip text NOT NULL,
         created_at timestamptz NOT NULL DEFAULT now()
       )`);
-    await queryRunner.query(`CREATE INDEX login_failures_email_idx ON login_failures (email_key, created_at)`);
-    await queryRunner.query(`CREATE INDEX login_failures_ip_idx ON login_failures (ip, created_at)`);
+    await queryRunner.query(
+      `CREATE INDEX login_failures_email_idx ON login_failures (email_key, created_at)`,
+    );
+    await queryRunner.query(
+      `CREATE INDEX login_failures_ip_idx ON login_failures (ip, created_at)`,
+    );
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
