@@ -1,11 +1,15 @@
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
+import { json } from 'express';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { createValidationPipe } from './common/validation/validation-pipe';
 import { AppConfig } from './config/app-config';
+
+/** Nest's own body parser stays off: configureApp installs one whose errors keep the API's error shape. */
+export const NEST_APP_OPTIONS = { bodyParser: false } as const;
 
 /** Everything the running server and the tests configure the same way. */
 export function configureApp(app: NestExpressApplication): void {
@@ -14,7 +18,10 @@ export function configureApp(app: NestExpressApplication): void {
   app.setGlobalPrefix('api');
   app.set('trust proxy', config.trustProxy ? 1 : false);
   app.disable('x-powered-by');
-  app.useBodyParser('json', { limit: '1mb' });
+  const errors = new ApiExceptionFilter();
+  // Nest's own body parser is off (see createApp) so that parse errors reach our error shape.
+  app.use(json({ limit: '1mb' }));
+  app.use(errors.middleware);
   app.use(cookieParser());
   app.use(
     helmet({
@@ -39,7 +46,7 @@ export function configureApp(app: NestExpressApplication): void {
     }),
   );
   app.useGlobalPipes(createValidationPipe());
-  app.useGlobalFilters(new ApiExceptionFilter());
+  app.useGlobalFilters(errors);
   app.enableShutdownHooks();
 
   const document = SwaggerModule.createDocument(

@@ -2,11 +2,14 @@ import 'reflect-metadata';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module';
-import { configureApp } from './app.setup';
+import { configureApp, NEST_APP_OPTIONS } from './app.setup';
 import { AppConfig } from './config/app-config';
 
 async function bootstrap(): Promise<void> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { bufferLogs: true });
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, {
+    ...NEST_APP_OPTIONS,
+    bufferLogs: true,
+  });
   configureApp(app);
   const config = app.get(AppConfig);
   await app.listen(config.port, config.host);

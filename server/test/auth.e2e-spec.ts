@@ -131,8 +131,20 @@ describe('sign-up', () => {
       .set('Content-Type', 'application/json')
       .send('{"email": "a@b.test",')
       .expect(400);
-    expect(response.body).toMatchObject({ statusCode: 400, error: 'Bad Request' });
-    expect(typeof response.body.message).toBe('string');
+    expect(response.body).toEqual({
+      statusCode: 400,
+      error: 'Bad Request',
+      message: 'The request body is not valid JSON',
+    });
+  });
+
+  it('answers 413 in the error shape for a body over 1 MB', async () => {
+    const response = await testApp
+      .http()
+      .post('/api/auth/signup')
+      .send({ companyName: 'x'.repeat(1_100_000) })
+      .expect(413);
+    expect(response.body).toMatchObject({ statusCode: 413, error: 'Payload Too Large' });
   });
 });
 

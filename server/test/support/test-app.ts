@@ -5,7 +5,7 @@ import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { DataSource } from 'typeorm';
 import { AppModule } from '../../src/app.module';
-import { configureApp } from '../../src/app.setup';
+import { configureApp, NEST_APP_OPTIONS } from '../../src/app.setup';
 
 export type TestApp = {
   app: NestExpressApplication;
@@ -17,7 +17,10 @@ export type TestApp = {
 /** The real application, wired exactly as in production, against the test database. */
 export async function createTestApp(): Promise<TestApp> {
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: false });
+  const app = moduleRef.createNestApplication<NestExpressApplication>({
+    ...NEST_APP_OPTIONS,
+    logger: false,
+  });
   configureApp(app);
   await app.init();
   return {

@@ -7,7 +7,7 @@ import {
   Logger,
 } from '@nestjs/common';
 import type { ApiErrorBody } from '@pondwright/shared';
-import type { Response } from 'express';
+import type { NextFunction, Request, Response } from 'express';
 import { STATUS_CODES } from 'node:http';
 import { AppError } from '../errors/app-error';
 
@@ -19,7 +19,24 @@ export class ApiExceptionFilter implements ExceptionFilter {
   private readonly logger = new Logger('ApiExceptionFilter');
 
   catch(exception: unknown, host: ArgumentsHost): void {
-    const response = host.switchToHttp().getResponse<Response>();
+    this.reply(exception, host.switchToHttp().getResponse<Response>());
+  }
+
+  /**
+   * Express error middleware with the same behaviour, for errors raised before Nest's pipeline (the JSON
+   * body parser: malformed JSON, a body over the size limit).
+   */
+  readonly middleware = (
+    error: unknown,
+    _request: Request,
+    response: Response,
+    next: NextFunction,
+  ): void => {
+    if (response.headersSent) return next(error);
+    this.reply(error, response);
+  };
+
+  private reply(exception: unknown, response: Response): void {
     const body = this.toBody(exception);
     if (body.statusCode >= 500) {
       this.logger.error(
