@@ -16,6 +16,7 @@ import { AppConfigModule } from './config/app-config.module';
 import { dataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { InvitesModule } from './invites/invites.module';
+import { TakeoffModule } from './takeoff/takeoff.module';
 import { UsersModule } from './users/users.module';
 
 @Module({
@@ -52,6 +53,7 @@ import { UsersModule } from './users/users.module';
     UsersModule,
     InvitesModule,
     HealthModule,
+    TakeoffModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     ServeStaticModule.forRootAsync({
       inject: [AppConfig],

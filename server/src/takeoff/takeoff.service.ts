@@ -1,0 +1,16 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { computeTakeoff, type Takeoff } from '@pondwright/shared/engine';
+
+/** The server's run of the shared takeoff engine: the same code the client previews with, as the authority. */
+@Injectable()
+export class TakeoffService {
+  compute(input: unknown): Takeoff {
+    const result = computeTakeoff(input);
+    if (!result.ok) {
+      const message =
+        result.errors.length === 1 ? result.errors[0]!.message : 'Some fields need attention';
+      throw new BadRequestException({ message, details: result.errors });
+    }
+    return result.takeoff;
+  }
+}
