@@ -1,0 +1,54 @@
+import { useMemo } from 'react';
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import { PageLoader } from '@/components/page-loader';
+import { paths } from '@/config/paths';
+import { NotFoundRoute } from './routes/not-found';
+import { Root } from './routes/root';
+import { RouteError } from './routes/route-error';
+import { SignInRoute } from './routes/sign-in';
+
+/** The whole route tree; tests mount the same tree in a memory router. */
+export function createAppRoutes(): RouteObject[] {
+  return [
+    {
+      element: <Root />,
+      errorElement: <RouteError />,
+      hydrateFallbackElement: <PageLoader fullScreen label="Opening Pondwright…" />,
+      children: [
+        // Sign-in is where most visits start, and signing out must reach it without a
+        // network round trip, so it is not split into its own chunk.
+        { path: paths.signIn.path, Component: SignInRoute },
+        {
+          path: paths.signUp.path,
+          lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }),
+        },
+        {
+          path: paths.acceptInvite.path,
+          lazy: async () => ({
+            Component: (await import('./routes/accept-invite')).AcceptInviteRoute,
+          }),
+        },
+        {
+          path: paths.home.path,
+          lazy: async () => ({ Component: (await import('./routes/app/root')).AppRoot }),
+          children: [
+            {
+              index: true,
+              lazy: async () => ({ Component: (await import('./routes/app/home')).HomeRoute }),
+            },
+            {
+              path: paths.team.path,
+              lazy: async () => ({ Component: (await import('./routes/app/team')).TeamRoute }),
+            },
+          ],
+        },
+        { path: '*', Component: NotFoundRoute },
+      ],
+    },
+  ];
+}
+
+export function AppRouter() {
+  const router = useMemo(() => createBrowserRouter(createAppRoutes()), []);
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,28 @@
+export const paths = {
+  home: { path: '/', getHref: () => '/' },
+  team: { path: '/team', getHref: () => '/team' },
+  signIn: {
+    path: '/sign-in',
+    getHref: (next?: string | null) =>
+      next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in',
+  },
+  signUp: { path: '/sign-up', getHref: () => '/sign-up' },
+  acceptInvite: {
+    path: '/accept-invite/:token',
+    getHref: (token: string) => `/accept-invite/${encodeURIComponent(token)}`,
+  },
+} as const;
+
+/**
+ * Accepts only same-site absolute paths, so a crafted `?next=` link cannot send a user
+ * who just signed in to another site.
+ */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) {
+    return paths.home.getHref();
+  }
+  if (next.startsWith(paths.signIn.path) || next.startsWith(paths.signUp.path)) {
+    return paths.home.getHref();
+  }
+  return next;
+}

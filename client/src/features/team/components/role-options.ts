@@ -1,0 +1,3 @@
+import { ROLE_LABELS, ROLES } from '@pondwright/shared';
+
+export const roleOptions = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }));

@@ -1,0 +1,13 @@
+import { ROLES, type Role } from '@pondwright/shared';
+
+/** Which roles may open each area of the app. The server enforces the same rules. */
+export const AREA_ROLES = {
+  home: ROLES,
+  team: ['owner'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Area = keyof typeof AREA_ROLES;
+
+export function canAccess(role: Role, area: Area): boolean {
+  return (AREA_ROLES[area] as readonly Role[]).includes(role);
+}

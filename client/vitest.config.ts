@@ -1,0 +1,16 @@
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+import { aliases } from './vite.config.ts';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: { alias: aliases },
+  test: {
+    environment: 'jsdom',
+    include: ['src/**/*.test.ts', 'src/**/*.test.tsx'],
+    setupFiles: ['./src/testing/setup-tests.ts'],
+    css: false,
+    restoreMocks: true,
+    unstubGlobals: true,
+  },
+});
