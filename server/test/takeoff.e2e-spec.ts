@@ -30,6 +30,30 @@ describe('POST /api/takeoff', () => {
     expect(volume?.sources.length).toBeGreaterThan(0);
   });
 
+  it('measures a freeform outline that bends inward (the server always has the polygon-offset module)', async () => {
+    const owner = await signupCompany(testApp);
+    const input = typicalPond();
+    // An L-shaped pond: 14 × 12 ft with a 8 × 6 ft corner left out, 14·12 − 8·6 = 120 ft² by hand.
+    input.basins[0]!.outline = {
+      shape: 'freeform',
+      pointsFt: [
+        { xFt: 0, yFt: 0 },
+        { xFt: 14, yFt: 0 },
+        { xFt: 14, yFt: 6 },
+        { xFt: 6, yFt: 6 },
+        { xFt: 6, yFt: 12 },
+        { xFt: 0, yFt: 12 },
+      ],
+    };
+    const response = await testApp
+      .http()
+      .post('/api/takeoff')
+      .set(...bearer(owner))
+      .send(input)
+      .expect(200);
+    expect(response.body.basins[0].surfaceAreaSqFt).toBeCloseTo(120, 5);
+  });
+
   it('answers 400 with a message per field, naming each by its path', async () => {
     const owner = await signupCompany(testApp);
     const bad = typicalPond();

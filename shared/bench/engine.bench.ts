@@ -1,6 +1,6 @@
 // Times the takeoff engine: median milliseconds per takeoff for a typical pond and for a large
 // feature (three freeform basins of 200 points, 20 lighting runs). Run with `npm run bench:engine`.
-import { computeTakeoff } from '../src/engine/index';
+import { computeFullTakeoff as computeTakeoff } from '../src/engine/testing/full-engine';
 import { largeFeature, typicalPond } from '../src/engine/fixtures/sample-inputs';
 
 type Case = { name: string; input: unknown; warmup: number; runs: number; goalMs: number };

@@ -1,6 +1,7 @@
 // The takeoff engine: pure functions from a water feature's dimensions to quantities.
 export { computeTakeoff } from './takeoff/compute-takeoff';
-export { validateInput, toFieldErrors } from './takeoff/validate-input';
+export { validateInput, toFieldErrors, type EngineGeometry } from './takeoff/validate-input';
+export { needsPolygonLibrary, type PolygonInset } from './geometry/plan-shape';
 export {
   takeoffInputSchema,
   outlineSchema,

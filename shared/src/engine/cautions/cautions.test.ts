@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { typicalPond } from '../fixtures/sample-inputs';
-import { computeTakeoff } from '../takeoff/compute-takeoff';
+import { computeFullTakeoff as computeTakeoff } from '../testing/full-engine';
 import type { TakeoffInput } from '../schemas/takeoff-input';
 
 const codesOf = (input: TakeoffInput) => {

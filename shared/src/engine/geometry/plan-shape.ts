@@ -1,5 +1,6 @@
 import type { OutlineInput } from '../schemas/takeoff-input';
-import { insetPolygon } from './polygon-inset';
+import { insetConvexPolygon, isConvex } from './convex-inset';
+import type { InsetResult } from './polygon-inset';
 import { minimumBoundingRectangle, perimeterFt, signedAreaSqFt, type PointFt } from './polygon';
 
 /**
@@ -19,6 +20,22 @@ export type PlanShape = {
 };
 
 /**
+ * Insets any simple polygon (convex or not) by a distance in ft. The engine computes convex outlines
+ * itself; outlines with inward bends need a general polygon-offset library, which the caller supplies
+ * (`insetPolygon` from `@pondwright/shared/engine/polygon-inset`) so that browsers load it only when an
+ * outline needs it.
+ */
+export type PolygonInset = (
+  points: readonly { xFt: number; yFt: number }[],
+  insetFt: number,
+) => InsetResult;
+
+/** True when this outline's shelves can only be measured with a general polygon-offset library. */
+export function needsPolygonLibrary(outline: OutlineInput): boolean {
+  return outline.shape === 'freeform' && !isConvex(outline.pointsFt);
+}
+
+/**
  * Ramanujan's second approximation of an ellipse's perimeter with semi-axes a, b (ft). Its relative
  * error is below 1e-9 for the aspect ratios of garden ponds.
  */
@@ -31,6 +48,7 @@ function polygonShape(
   points: readonly PointFt[],
   shape: OutlineInput['shape'],
   method: string,
+  inset: PolygonInset,
 ): PlanShape {
   const cache = new Map<number, { areaSqFt: number; perimeterFt: number }>();
   const at = (insetFt: number) => {
@@ -40,7 +58,7 @@ function polygonShape(
       hit =
         insetFt <= 0
           ? { areaSqFt: Math.abs(signedAreaSqFt(points)), perimeterFt: perimeterFt(points) }
-          : insetPolygon(points, insetFt);
+          : inset(points, insetFt);
       cache.set(key, hit);
     }
     return hit;
@@ -71,9 +89,14 @@ function ellipsePoints(a: number, b: number, segments: number): PointFt[] {
  * - Oval (ellipse, semi-axes a ≥ b) inset by t ≤ b²/a (its smallest radius of curvature): the inner
  *   parallel body has area πab − P·t + πt² and perimeter P − 2πt (Steiner's formula), P by Ramanujan.
  *   Deeper insets use a polygon of `ovalSegments` sides and polygon offsetting.
- * - Freeform polygon: polygon offsetting with round joins.
+ * - Freeform polygon: a convex outline is inset edge by edge (exact); one with inward bends is offset
+ *   with round joins by `insetNonConvex`, which must then be given.
  */
-export function planShape(outline: OutlineInput, ovalSegments: number): PlanShape {
+export function planShape(
+  outline: OutlineInput,
+  ovalSegments: number,
+  insetNonConvex?: PolygonInset,
+): PlanShape {
   if (outline.shape === 'rectangle') {
     const L = outline.lengthFt;
     const W = outline.widthFt;
@@ -93,7 +116,7 @@ export function planShape(outline: OutlineInput, ovalSegments: number): PlanShap
     const smoothLimit = (b * b) / a;
     let polygon: PlanShape | null = null;
     const fallback = () =>
-      (polygon ??= polygonShape(ellipsePoints(a, b, ovalSegments), 'oval', ''));
+      (polygon ??= polygonShape(ellipsePoints(a, b, ovalSegments), 'oval', '', insetConvexPolygon));
     return {
       shape: 'oval',
       lengthFt: 2 * a,
@@ -110,8 +133,26 @@ export function planShape(outline: OutlineInput, ovalSegments: number): PlanShap
         if (t <= smoothLimit) return perimeter - 2 * Math.PI * t;
         return fallback().perimeterAt(t);
       },
-      method: `ellipse inset by t: πab − P·t + πt² (Steiner) while t ≤ b²/a = ${smoothLimit.toFixed(2)} ft, else a ${ovalSegments}-sided polygon offset`,
+      method: `ellipse inset by t: πab − P·t + πt² (Steiner) while t ≤ b²/a = ${smoothLimit.toFixed(2)} ft, else a ${ovalSegments}-sided polygon inset edge by edge`,
     };
   }
-  return polygonShape(outline.pointsFt, 'freeform', 'polygon offset with round joins (Clipper)');
+  if (isConvex(outline.pointsFt)) {
+    return polygonShape(
+      outline.pointsFt,
+      'freeform',
+      'convex outline inset edge by edge (exact)',
+      insetConvexPolygon,
+    );
+  }
+  if (!insetNonConvex) {
+    throw new Error(
+      'An outline with inward bends needs a polygon-offset function (validation checks this first)',
+    );
+  }
+  return polygonShape(
+    outline.pointsFt,
+    'freeform',
+    'polygon offset with round joins (Clipper)',
+    insetNonConvex,
+  );
 }

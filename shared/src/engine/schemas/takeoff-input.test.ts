@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { computeTakeoff } from '../takeoff/compute-takeoff';
+import { computeFullTakeoff as computeTakeoff } from '../testing/full-engine';
 import { typicalPond } from '../fixtures/sample-inputs';
 import type { TakeoffInput } from './takeoff-input';
 

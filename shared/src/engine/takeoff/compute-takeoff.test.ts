@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { typicalPond } from '../fixtures/sample-inputs';
 import { takeoffSchema, type Takeoff } from '../schemas/takeoff-output';
 import type { TakeoffInput } from '../schemas/takeoff-input';
-import { computeTakeoff } from './compute-takeoff';
+import { computeFullTakeoff as computeTakeoff } from '../testing/full-engine';
+import { computeTakeoff as bareComputeTakeoff } from './compute-takeoff';
 import { defaultEngineParameters } from '../parameters/defaults';
 import type { EngineParameters } from '../parameters/parameters-schema';
 
@@ -243,3 +244,47 @@ describe('other parts of a feature', () => {
 function typicalParams(): EngineParameters {
   return JSON.parse(JSON.stringify(defaultEngineParameters)) as EngineParameters;
 }
+
+describe('outlines and the polygon-offset module', () => {
+  const lShape = {
+    shape: 'freeform' as const,
+    pointsFt: [
+      { xFt: 0, yFt: 0 },
+      { xFt: 14, yFt: 0 },
+      { xFt: 14, yFt: 6 },
+      { xFt: 6, yFt: 6 },
+      { xFt: 6, yFt: 12 },
+      { xFt: 0, yFt: 12 },
+    ],
+  };
+  const withOutline = (outline: typeof lShape) => {
+    const input = typicalPond();
+    input.basins[0]!.outline = outline;
+    return input;
+  };
+
+  it('measures a convex freeform outline without the module, exactly as with it', () => {
+    const hexagon = {
+      shape: 'freeform' as const,
+      pointsFt: Array.from({ length: 6 }, (_, i) => ({
+        xFt: 8 * Math.cos((Math.PI * i) / 3),
+        yFt: 8 * Math.sin((Math.PI * i) / 3),
+      })),
+    };
+    const bare = bareComputeTakeoff(withOutline(hexagon));
+    const full = computeTakeoff(withOutline(hexagon));
+    if (!bare.ok || !full.ok) throw new Error('expected both to compute');
+    expect(bare.takeoff.water.volumeGallons).toBeCloseTo(full.takeoff.water.volumeGallons, 6);
+  });
+
+  it('reports an outline that bends inward as a field message when the module is not given', () => {
+    const bare = bareComputeTakeoff(withOutline(lShape));
+    expect(bare).toEqual({
+      ok: false,
+      errors: [
+        { field: 'basins.0.outline', message: expect.stringMatching(/polygon-offset module/) },
+      ],
+    });
+    expect(computeTakeoff(withOutline(lShape)).ok).toBe(true);
+  });
+});

@@ -25,7 +25,7 @@ import {
   US_GALLONS_PER_CUBIC_FOOT,
 } from '../units/units';
 import { buildCautions } from '../cautions/cautions';
-import { validateInput } from './validate-input';
+import { validateInput, type EngineGeometry } from './validate-input';
 
 const r1 = (v: number) => roundTo(v, 1);
 const r2 = (v: number) => roundTo(v, 2);
@@ -41,12 +41,16 @@ const r0 = (v: number) => roundTo(v, 0);
  * @param input  anything; validated against `takeoffInputSchema`.
  * @param params rates, densities and catalogues (`defaultEngineParameters` unless the price book
  *               supplies its own; validated when not the defaults).
+ * @param geometry the general polygon offset (`insetPolygon` from
+ *               `@pondwright/shared/engine/polygon-inset`), needed only for freeform outlines that bend
+ *               inward; without it such an outline is reported as a field message, never thrown.
  */
 export function computeTakeoff(
   input: unknown,
   params: EngineParameters = defaultEngineParameters,
+  geometry: EngineGeometry = {},
 ): TakeoffResult {
-  const validated = validateInput(input, params);
+  const validated = validateInput(input, params, geometry);
   if (!validated.ok) return validated;
   const { input: data, params: p, profiles, method } = validated.prepared;
   const ex = new Explainer(data.unitSystem);

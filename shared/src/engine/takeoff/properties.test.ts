@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { typicalPond, wobblyOutline } from '../fixtures/sample-inputs';
 import type { BasinInput, OutlineInput, TakeoffInput } from '../schemas/takeoff-input';
-import { computeTakeoff } from './compute-takeoff';
+import { computeFullTakeoff as computeTakeoff } from '../testing/full-engine';
 
 type Plan = {
   shape: 'rectangle' | 'oval' | 'freeform';

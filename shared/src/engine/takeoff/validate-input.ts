@@ -1,11 +1,17 @@
 import type { z } from 'zod';
 import { basinProfile, type BasinProfile } from '../basin/basin-profile';
-import { planShape } from '../geometry/plan-shape';
+import { needsPolygonLibrary, planShape, type PolygonInset } from '../geometry/plan-shape';
 import { engineParametersSchema, type EngineParameters } from '../parameters/parameters-schema';
 import { defaultEngineParameters } from '../parameters/defaults';
 import { takeoffInputSchema, type TakeoffInput } from '../schemas/takeoff-input';
 import type { FieldError } from '../schemas/takeoff-output';
 import { inchesToFeet } from '../units/units';
+
+/**
+ * Geometry the caller supplies: the general polygon offset for outlines that bend inward (the server
+ * always passes it; a browser loads it on demand, see `@pondwright/shared/engine/polygon-inset`).
+ */
+export type EngineGeometry = { insetPolygon?: PolygonInset };
 
 export type PreparedInput = {
   input: TakeoffInput;
@@ -107,6 +113,7 @@ function dedupe(errors: FieldError[]): FieldError[] {
 export function validateInput(
   raw: unknown,
   rawParams: EngineParameters,
+  geometry: EngineGeometry = {},
 ): { ok: true; prepared: PreparedInput } | { ok: false; errors: FieldError[] } {
   let params = rawParams;
   if (rawParams !== defaultEngineParameters) {
@@ -118,10 +125,24 @@ export function validateInput(
   const parsed = takeoffInputSchema.safeParse(raw);
   if (!parsed.success) return { ok: false, errors: toFieldErrors(parsed.error.issues) };
   const input = parsed.data;
+  const unmeasurable = geometry.insetPolygon
+    ? []
+    : input.basins.flatMap((basin, index) =>
+        needsPolygonLibrary(basin.outline)
+          ? [
+              {
+                field: `basins.${index}.outline`,
+                message:
+                  'This outline bends inward: its shelves need the polygon-offset module, which is not loaded yet',
+              },
+            ]
+          : [],
+      );
+  if (unmeasurable.length > 0) return { ok: false, errors: unmeasurable };
   const profiles = input.basins.map((basin) =>
     basinProfile(
       basin,
-      planShape(basin.outline, params.geometry.ovalPolygonSegments),
+      planShape(basin.outline, params.geometry.ovalPolygonSegments, geometry.insetPolygon),
       params.geometry.batterRunPerRise,
     ),
   );
