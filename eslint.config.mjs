@@ -1,7 +1,32 @@
+import { readdirSync } from 'node:fs';
 import js from '@eslint/js';
 import globals from 'globals';
 import reactHooks from 'eslint-plugin-react-hooks';
 import tseslint from 'typescript-eslint';
+
+// Client layering (STYLE.md): app → features → shared code, one way only; features never import each other.
+const clientFeatures = readdirSync(new URL('./client/src/features', import.meta.url), {
+  withFileTypes: true,
+})
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
+
+const featureBoundaries = clientFeatures.map((feature) => ({
+  files: [`client/src/features/${feature}/**/*.{ts,tsx}`],
+  rules: {
+    'no-restricted-imports': [
+      'error',
+      {
+        patterns: [
+          {
+            regex: `^@/(app(/|$)|features/(?!${feature}(/|$)))`,
+            message: 'A feature imports only itself and shared code; compose features in src/app.',
+          },
+        ],
+      },
+    ],
+  },
+}));
 
 export default tseslint.config(
   {
@@ -36,6 +61,24 @@ export default tseslint.config(
     rules: {
       'react-hooks/rules-of-hooks': 'error',
       'react-hooks/exhaustive-deps': 'warn',
+    },
+  },
+  ...featureBoundaries,
+  {
+    files: ['client/src/{components,lib,config,testing}/**/*.{ts,tsx}'],
+    ignores: ['client/src/testing/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^@/(app|features)(/|$)',
+              message: 'Shared client code does not depend on features or the app.',
+            },
+          ],
+        },
+      ],
     },
   },
   {
