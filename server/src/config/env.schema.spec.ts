@@ -1,0 +1,49 @@
+import { describe, expect, it } from 'vitest';
+import { validateEnv } from './env.schema';
+
+const strongSecret = 'k7Qp2vX9mR4tL8wZ1nB6cF3hJ5dS0gYa';
+
+describe('validateEnv', () => {
+  it('lists every missing or invalid setting at once', () => {
+    const message = captureError(() => validateEnv({ PORT: 'not-a-port' }));
+    const named = message
+      .split('\n')
+      .filter((line) => line.startsWith('  - '))
+      .map((line) => line.slice(4).split(':')[0]);
+    expect(named.sort()).toEqual(['DB_PASSWORD', 'JWT_SECRET', 'PORT']);
+  });
+
+  it('refuses an HS256 key shorter than 256 bits (RFC 7518 §3.2) and a repetitive one', () => {
+    expect(() => validateEnv({ DB_PASSWORD: 'x', JWT_SECRET: 'short-secret' })).toThrowError(
+      /at least 32 bytes/,
+    );
+    expect(() => validateEnv({ DB_PASSWORD: 'x', JWT_SECRET: 'a'.repeat(40) })).toThrowError(
+      /looks weak/,
+    );
+  });
+
+  it('caps the access-token lifetime at 15 minutes', () => {
+    expect(() =>
+      validateEnv({ DB_PASSWORD: 'x', JWT_SECRET: strongSecret, JWT_ACCESS_TTL_SECONDS: '3600' }),
+    ).toThrowError(/JWT_ACCESS_TTL_SECONDS/);
+  });
+
+  it('fills the defaults: loopback, port 3000, the private database port', () => {
+    const env = validateEnv({ DB_PASSWORD: 'x', JWT_SECRET: strongSecret });
+    expect(env).toMatchObject({
+      HOST: '127.0.0.1',
+      PORT: 3000,
+      DB_PORT: 54329,
+      JWT_ACCESS_TTL_SECONDS: 900,
+    });
+  });
+});
+
+function captureError(run: () => unknown): string {
+  try {
+    run();
+  } catch (error) {
+    return (error as Error).message;
+  }
+  throw new Error('expected an error');
+}
