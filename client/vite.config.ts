@@ -8,6 +8,10 @@ const fromHere = (path: string) => fileURLToPath(new URL(path, import.meta.url))
 export const aliases = [
   { find: /^@\//, replacement: `${fromHere('src')}/` },
   { find: /^@pondwright\/shared\/engine$/, replacement: fromHere('../shared/src/engine/index.ts') },
+  {
+    find: /^@pondwright\/shared\/engine\/polygon-inset$/,
+    replacement: fromHere('../shared/src/engine/polygon-inset.ts'),
+  },
   { find: /^@pondwright\/shared$/, replacement: fromHere('../shared/src/index.ts') },
 ];
 

@@ -6,6 +6,7 @@ import { renderApp } from '@/testing/render';
 
 const owner = buildCurrentUser({ name: 'Olive Owner', role: 'owner' });
 const estimator = buildCurrentUser({ name: 'Esme Estimator', role: 'estimator' });
+const crewLead = buildCurrentUser({ name: 'Cal Crewlead', role: 'crew_lead' });
 
 function signedInAs(user: typeof owner, extra: Parameters<typeof mockApi>[0] = {}) {
   return mockApi({
@@ -43,6 +44,48 @@ describe('app routes', () => {
     const estimatorNav = await screen.findByRole('navigation', { name: 'Main' });
     expect(within(estimatorNav).getByRole('link', { name: 'Home' })).toBeInTheDocument();
     expect(within(estimatorNav).queryByRole('link', { name: 'Team' })).not.toBeInTheDocument();
+  });
+
+  it('shows Takeoff in the navigation to owners and estimators, not to crew leads', async () => {
+    signedInAs(estimator);
+    const first = renderApp('/');
+    const estimatorNav = await screen.findByRole('navigation', { name: 'Main' });
+    expect(within(estimatorNav).getByRole('link', { name: 'Takeoff' })).toHaveAttribute(
+      'href',
+      '/takeoff',
+    );
+    first.unmount();
+
+    signedInAs(owner);
+    const second = renderApp('/');
+    const ownerNav = await screen.findByRole('navigation', { name: 'Main' });
+    expect(within(ownerNav).getByRole('link', { name: 'Takeoff' })).toBeInTheDocument();
+    second.unmount();
+
+    signedInAs(crewLead);
+    renderApp('/');
+    const crewNav = await screen.findByRole('navigation', { name: 'Main' });
+    expect(within(crewNav).getByRole('link', { name: 'Home' })).toBeInTheDocument();
+    expect(within(crewNav).queryByRole('link', { name: 'Takeoff' })).not.toBeInTheDocument();
+  });
+
+  it('opens the takeoff screen for an estimator with the default pond computed', async () => {
+    signedInAs(estimator);
+    renderApp('/takeoff');
+
+    expect(await screen.findByRole('heading', { name: 'Takeoff' })).toBeInTheDocument();
+    expect(await screen.findByRole('article', { name: 'Water volume' })).toHaveTextContent(
+      '1,326 gal',
+    );
+  });
+
+  it('shows a not-allowed state when a crew lead opens /takeoff', async () => {
+    signedInAs(crewLead);
+    renderApp('/takeoff');
+
+    expect(await screen.findByText('Not available for your role')).toBeInTheDocument();
+    expect(screen.getByText(/does not include takeoffs/)).toBeInTheDocument();
+    expect(screen.queryByLabelText('Max depth (ft)')).not.toBeInTheDocument();
   });
 
   it('shows a not-allowed state, and loads no team data, when an estimator opens /team', async () => {

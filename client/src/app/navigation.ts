@@ -1,12 +1,13 @@
 import type { Role } from '@pondwright/shared';
-import { IconHome2, IconUsersGroup } from '@tabler/icons-react';
+import { IconHome2, IconRulerMeasure, IconUsersGroup } from '@tabler/icons-react';
 import type { AppNavItem } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
 import { canAccess, type Area } from '@/lib/authorization';
 
 const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
   { label: 'Home', to: paths.home.getHref(), icon: IconHome2, area: 'home' },
-  // Takeoff, Estimates, Price book and Jobs are added here, each with its own area in
+  { label: 'Takeoff', to: paths.takeoff.getHref(), icon: IconRulerMeasure, area: 'takeoff' },
+  // Estimates, Price book and Jobs are added here, each with its own area in
   // lib/authorization.ts, when their pages exist; links to missing pages are not shown.
   { label: 'Team', to: paths.team.getHref(), icon: IconUsersGroup, area: 'team' },
 ];

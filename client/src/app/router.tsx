@@ -40,6 +40,13 @@ export function createAppRoutes(): RouteObject[] {
               path: paths.team.path,
               lazy: async () => ({ Component: (await import('./routes/app/team')).TeamRoute }),
             },
+            {
+              // The takeoff engine and its polygon library load with this chunk only.
+              path: paths.takeoff.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/takeoff')).TakeoffRoute,
+              }),
+            },
           ],
         },
         { path: '*', Component: NotFoundRoute },

@@ -1,6 +1,7 @@
 export const paths = {
   home: { path: '/', getHref: () => '/' },
   team: { path: '/team', getHref: () => '/team' },
+  takeoff: { path: '/takeoff', getHref: () => '/takeoff' },
   signIn: {
     path: '/sign-in',
     getHref: (next?: string | null) =>

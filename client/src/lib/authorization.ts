@@ -4,6 +4,7 @@ import { ROLES, type Role } from '@pondwright/shared';
 export const AREA_ROLES = {
   home: ROLES,
   team: ['owner'],
+  takeoff: ['owner', 'estimator'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Area = keyof typeof AREA_ROLES;

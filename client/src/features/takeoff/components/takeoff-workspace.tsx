@@ -1,0 +1,161 @@
+import {
+  Box,
+  Grid,
+  Group,
+  Loader,
+  Paper,
+  SegmentedControl,
+  Stack,
+  Text,
+  Title,
+  useMantineTheme,
+  useMatches,
+} from '@mantine/core';
+import type { TakeoffInput } from '@pondwright/shared/engine';
+import { useCallback, useMemo, useState } from 'react';
+import { anyOutlineBendsInward, usePolygonInset } from '../hooks/use-polygon-inset';
+import { useTakeoffPreview } from '../hooks/use-takeoff-preview';
+import { DEFAULT_TAKEOFF_INPUT } from '../utils/default-input';
+import { sectionOf, type FormSection } from '../utils/form-sections';
+import { toEngineInput } from '../utils/to-engine-input';
+import { ErrorSummary } from './error-summary';
+import { ServerCheck } from './server-check';
+import {
+  FieldErrorsContext,
+  inputId,
+  TakeoffFormProvider,
+  useTakeoffForm,
+} from './takeoff-form-context';
+import { TakeoffForm } from './takeoff-form';
+import { TakeoffResults } from './takeoff-results';
+
+const UNIT_SYSTEMS = [
+  { value: 'us', label: 'US units' },
+  { value: 'metric', label: 'Metric' },
+];
+
+/** The element for a field, or for the nearest group around it that has one. */
+function findFieldElement(field: string): HTMLElement | null {
+  const segments = field.split('.');
+  while (segments.length > 0) {
+    const element = document.getElementById(inputId(segments.join('.')));
+    if (element) return element;
+    segments.pop();
+  }
+  return null;
+}
+
+/** The takeoff screen: measurements on the left, the engine's figures on the right as they are typed. */
+export function TakeoffWorkspace({
+  initialValues = DEFAULT_TAKEOFF_INPUT,
+}: {
+  initialValues?: TakeoffInput;
+}) {
+  const theme = useMantineTheme();
+  const form = useTakeoffForm({
+    mode: 'controlled',
+    initialValues: JSON.parse(JSON.stringify(initialValues)) as TakeoffInput,
+  });
+  const values = form.getValues();
+  const polygons = usePolygonInset(anyOutlineBendsInward(values));
+  const preview = useTakeoffPreview(values, polygons.geometry, polygons.loading);
+  const engineInput = useMemo(() => toEngineInput(values), [values]);
+  const [openSections, setOpenSections] = useState<FormSection[]>(['basins']);
+
+  const showField = useCallback((field: string) => {
+    const section = sectionOf(field);
+    if (section) {
+      setOpenSections((open) => (open.includes(section) ? open : [...open, section]));
+    }
+    // After the section has opened.
+    window.setTimeout(() => {
+      const element = findFieldElement(field);
+      element?.scrollIntoView({ block: 'center', behavior: 'smooth' });
+      element?.focus({ preventScroll: true });
+    }, 250);
+  }, []);
+
+  // Side by side, the result scrolls on its own so the figures stay beside the field being typed in.
+  const sideBySide = useMatches({ base: false, md: true });
+  const top = `calc(${theme.other.headerHeight as number}px + var(--mantine-spacing-lg))`;
+  const resultStyle = sideBySide
+    ? {
+        position: 'sticky' as const,
+        top,
+        maxHeight: `calc(100dvh - ${top} - var(--mantine-spacing-lg))`,
+        overflowY: 'auto' as const,
+        overscrollBehavior: 'contain' as const,
+        paddingRight: 'var(--mantine-spacing-xs)',
+      }
+    : undefined;
+
+  return (
+    <TakeoffFormProvider form={form}>
+      <FieldErrorsContext.Provider value={preview.errorMap}>
+        <Grid gap="lg" align="flex-start">
+          <Grid.Col span={{ base: 12, md: 5 }}>
+            <TakeoffForm openSections={openSections} onOpenSectionsChange={setOpenSections} />
+          </Grid.Col>
+          <Grid.Col span={{ base: 12, md: 7 }}>
+            <Box component="section" aria-labelledby="takeoff-result-title" style={resultStyle}>
+              <Stack gap="md">
+                <Paper p="sm">
+                  <Stack gap="xs">
+                    <Group justify="space-between" gap="sm">
+                      <Group gap="xs">
+                        <Title order={2} fz="h4" id="takeoff-result-title">
+                          Result
+                        </Title>
+                        {preview.updating && <Loader size="xs" aria-label="Updating" />}
+                      </Group>
+                      <SegmentedControl
+                        size="xs"
+                        aria-label="Show results in"
+                        data={UNIT_SYSTEMS}
+                        {...form.getInputProps('unitSystem')}
+                      />
+                    </Group>
+                    <Text size="xs" c="dimmed">
+                      Enter measurements in US units (ft, in) for now; the switch changes only how
+                      the results are shown.
+                    </Text>
+                    <ServerCheck
+                      input={engineInput}
+                      geometry={polygons.geometry}
+                      onShowField={showField}
+                    />
+                  </Stack>
+                </Paper>
+                {preview.errors.length > 0 && (
+                  <ErrorSummary
+                    title={
+                      preview.errors.length === 1
+                        ? 'One field needs another look'
+                        : `${preview.errors.length} fields need another look`
+                    }
+                    errors={preview.errors}
+                    onShowField={showField}
+                  >
+                    {preview.stale && (
+                      <Text size="sm" mb="xs">
+                        The figures below are from the last measurements that computed.
+                      </Text>
+                    )}
+                  </ErrorSummary>
+                )}
+                {preview.takeoff && (
+                  <Box
+                    style={{ opacity: preview.stale ? 0.55 : 1, transition: 'opacity 150ms' }}
+                    aria-busy={preview.updating}
+                  >
+                    <TakeoffResults takeoff={preview.takeoff} onShowField={showField} />
+                  </Box>
+                )}
+              </Stack>
+            </Box>
+          </Grid.Col>
+        </Grid>
+      </FieldErrorsContext.Provider>
+    </TakeoffFormProvider>
+  );
+}
