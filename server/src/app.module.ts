@@ -8,6 +8,7 @@ import { randomUUID } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { AuthModule } from './auth/auth.module';
+import { CompaniesModule } from './companies/companies.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
 import { TenancyModule } from './common/tenancy/tenancy.module';
@@ -50,6 +51,7 @@ import { UsersModule } from './users/users.module';
     }),
     TenancyModule,
     AuthModule,
+    CompaniesModule,
     UsersModule,
     InvitesModule,
     HealthModule,

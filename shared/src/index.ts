@@ -1,3 +1,4 @@
 export * from './auth/roles';
 export * from './auth/password-policy';
 export * from './auth/auth-schemas';
+export * from './company/company-schemas';

@@ -1,3 +1,4 @@
+import type { CompanyProfile } from '@pondwright/shared';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
 /** A contracting business: the tenant every other row belongs to. */
@@ -8,6 +9,10 @@ export class Company {
 
   @Column({ type: 'text' })
   name: string;
+
+  /** The units new estimates and takeoffs start in; each estimate may still choose its own. */
+  @Column({ name: 'unit_system', type: 'text', default: 'us' })
+  unitSystem: CompanyProfile['unitSystem'];
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;

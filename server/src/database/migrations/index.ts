@@ -1,4 +1,5 @@
 import { Foundation1796083200000 } from './1796083200000-foundation';
+import { CompanyUnitSystem1796086800000 } from './1796086800000-company-unit-system';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
-export const migrations = [Foundation1796083200000];
+export const migrations = [Foundation1796083200000, CompanyUnitSystem1796086800000];
