@@ -1,4 +1,4 @@
-import { typicalPond } from '../../shared/src/engine/fixtures/sample-inputs';
+import { examplePondInput as typicalPond } from '@pondwright/shared/engine';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addMember, bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
 

@@ -58,3 +58,5 @@ export {
   type QuantityKind,
 } from './units/display';
 export { LABOR_TASKS, type LaborTask } from './labor/labor-hours';
+/** A typical naturally balanced pond (15 × 10 ft, one shelf, a waterfall and a short stream) to start from. */
+export { typicalPond as examplePondInput } from './fixtures/sample-inputs';
