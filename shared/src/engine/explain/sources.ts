@@ -1,6 +1,6 @@
 import type { ExplanationSource } from './explanation';
 
-/** Sources cited in explanations, with the label used in shared/REFERENCES.md. */
+/** Sources cited in explanations, with the label used in docs/references.md. */
 export const SRC = {
   galPerCuFt: {
     name: 'US gal per ft³',

@@ -7,7 +7,7 @@ const CUBIC_METERS_PER_CUBIC_YARD = cubicYardsToCubicMeters(1);
 /**
  * The defaults the engine uses until a company's price book supplies its own values. Each one is marked
  * with its source, or as common practice with no source. "REFERENCES x.y" points to the row in
- * shared/REFERENCES.md that records the source and how well it is confirmed.
+ * docs/references.md that records the source and how well it is confirmed.
  */
 export const defaultEngineParameters: EngineParameters = {
   geometry: {
