@@ -1,6 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { buildCurrentUser, buildInvite, buildMember } from '@/testing/factories';
+import { buildCompany, buildCurrentUser, buildInvite, buildMember } from '@/testing/factories';
 import { apiError, json, mockApi, noContent } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render';
 
@@ -31,12 +31,16 @@ describe('app routes', () => {
     expect(server.callsTo('GET /api/auth/me')[0]?.headers.authorization).toBe('Bearer restored');
   });
 
-  it('shows Team in the navigation only to owners', async () => {
+  it('shows Team and Company in the navigation only to owners', async () => {
     signedInAs(owner);
     const first = renderApp('/');
     const ownerNav = await screen.findByRole('navigation', { name: 'Main' });
     expect(within(ownerNav).getByRole('link', { name: 'Home' })).toBeInTheDocument();
     expect(within(ownerNav).getByRole('link', { name: 'Team' })).toBeInTheDocument();
+    expect(within(ownerNav).getByRole('link', { name: 'Company' })).toHaveAttribute(
+      'href',
+      '/company',
+    );
     first.unmount();
 
     signedInAs(estimator);
@@ -44,6 +48,7 @@ describe('app routes', () => {
     const estimatorNav = await screen.findByRole('navigation', { name: 'Main' });
     expect(within(estimatorNav).getByRole('link', { name: 'Home' })).toBeInTheDocument();
     expect(within(estimatorNav).queryByRole('link', { name: 'Team' })).not.toBeInTheDocument();
+    expect(within(estimatorNav).queryByRole('link', { name: 'Company' })).not.toBeInTheDocument();
   });
 
   it('shows Takeoff in the navigation to owners and estimators, not to crew leads', async () => {
@@ -70,13 +75,35 @@ describe('app routes', () => {
   });
 
   it('opens the takeoff screen for an estimator with the default pond computed', async () => {
-    signedInAs(estimator);
+    signedInAs(estimator, { 'GET /api/company': json(buildCompany({ unitSystem: 'us' })) });
     renderApp('/takeoff');
 
     expect(await screen.findByRole('heading', { name: 'Takeoff' })).toBeInTheDocument();
     expect(await screen.findByRole('article', { name: 'Water volume' })).toHaveTextContent(
       '1,326 gal',
     );
+    expect(screen.getByRole('radio', { name: 'US units' })).toBeChecked();
+  });
+
+  it('starts the takeoff in metric when the company works in metric', async () => {
+    signedInAs(estimator, { 'GET /api/company': json(buildCompany({ unitSystem: 'metric' })) });
+    renderApp('/takeoff');
+
+    expect(await screen.findByRole('article', { name: 'Water volume' })).toHaveTextContent(
+      '5,018 L',
+    );
+    expect(screen.getByRole('radio', { name: 'Metric' })).toBeChecked();
+    expect(screen.getByLabelText('Max depth (m)')).toHaveValue('0.61');
+  });
+
+  it('starts the takeoff in US units when the company cannot be loaded', async () => {
+    signedInAs(estimator, { 'GET /api/company': apiError(404, 'No such company') });
+    renderApp('/takeoff');
+
+    expect(await screen.findByRole('article', { name: 'Water volume' })).toHaveTextContent(
+      '1,326 gal',
+    );
+    expect(screen.getByText(/default units could not be loaded/)).toBeInTheDocument();
   });
 
   it('shows a not-allowed state when a crew lead opens /takeoff', async () => {
@@ -96,6 +123,51 @@ describe('app routes', () => {
     expect(screen.queryByRole('table')).not.toBeInTheDocument();
     expect(server.callsTo('GET /api/users')).toHaveLength(0);
     expect(server.callsTo('GET /api/invites')).toHaveLength(0);
+  });
+
+  it('shows a not-allowed state, and loads no company, when an estimator opens /company', async () => {
+    const server = signedInAs(estimator);
+    renderApp('/company');
+
+    expect(await screen.findByText('Not available for your role')).toBeInTheDocument();
+    expect(screen.getByText(/does not include company settings/)).toBeInTheDocument();
+    expect(screen.queryByLabelText(/^Company name/)).not.toBeInTheDocument();
+    expect(server.callsTo('GET /api/company')).toHaveLength(0);
+  });
+
+  it('lets an owner rename the company, and the header follows', async () => {
+    const renamed = { ...owner, companyName: 'Lily Pad Works' };
+    const server = signedInAs(owner, {
+      'GET /api/auth/me': [json(owner), json(renamed)],
+      'GET /api/company': [json(buildCompany()), json(buildCompany({ name: 'Lily Pad Works' }))],
+      'PATCH /api/company': json(buildCompany({ name: 'Lily Pad Works' })),
+    });
+    const { user } = renderApp('/company');
+
+    const name = await screen.findByLabelText(/^Company name/);
+    expect(name).toHaveValue('Example Ponds Co');
+    expect(screen.getByRole('radio', { name: 'US customary (ft, gal)' })).toBeChecked();
+    await user.clear(name);
+    await user.type(name, 'Lily Pad Works');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+
+    expect(await screen.findByText(/Owner · Lily Pad Works/)).toBeInTheDocument();
+    expect(server.callsTo('PATCH /api/company')[0]?.body).toEqual({
+      name: 'Lily Pad Works',
+      unitSystem: 'us',
+    });
+  });
+
+  it('offers a retry when the company cannot be loaded on its page', async () => {
+    signedInAs(owner, {
+      'GET /api/company': [apiError(404, 'No such company'), json(buildCompany())],
+    });
+    const { user } = renderApp('/company');
+
+    expect(await screen.findByText('Could not load the company')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Try again' }));
+
+    expect(await screen.findByLabelText(/^Company name/)).toHaveValue('Example Ponds Co');
   });
 
   it('shows the team page to an owner', async () => {

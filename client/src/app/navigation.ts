@@ -1,5 +1,10 @@
 import type { Role } from '@pondwright/shared';
-import { IconHome2, IconRulerMeasure, IconUsersGroup } from '@tabler/icons-react';
+import {
+  IconBuildingStore,
+  IconHome2,
+  IconRulerMeasure,
+  IconUsersGroup,
+} from '@tabler/icons-react';
 import type { AppNavItem } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
 import { canAccess, type Area } from '@/lib/authorization';
@@ -10,6 +15,7 @@ const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
   // Estimates, Price book and Jobs are added here, each with its own area in
   // lib/authorization.ts, when their pages exist; links to missing pages are not shown.
   { label: 'Team', to: paths.team.getHref(), icon: IconUsersGroup, area: 'team' },
+  { label: 'Company', to: paths.company.getHref(), icon: IconBuildingStore, area: 'company' },
 ];
 
 export function navItemsFor(role: Role): AppNavItem[] {

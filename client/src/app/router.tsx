@@ -41,6 +41,12 @@ export function createAppRoutes(): RouteObject[] {
               lazy: async () => ({ Component: (await import('./routes/app/team')).TeamRoute }),
             },
             {
+              path: paths.company.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/company')).CompanyRoute,
+              }),
+            },
+            {
               // The takeoff engine and its polygon library load with this chunk only.
               path: paths.takeoff.path,
               lazy: async () => ({

@@ -1,6 +1,7 @@
 export const paths = {
   home: { path: '/', getHref: () => '/' },
   team: { path: '/team', getHref: () => '/team' },
+  company: { path: '/company', getHref: () => '/company' },
   takeoff: { path: '/takeoff', getHref: () => '/takeoff' },
   signIn: {
     path: '/sign-in',

@@ -4,6 +4,7 @@ import { ROLES, type Role } from '@pondwright/shared';
 export const AREA_ROLES = {
   home: ROLES,
   team: ['owner'],
+  company: ['owner'],
   takeoff: ['owner', 'estimator'],
 } as const satisfies Record<string, readonly Role[]>;
 

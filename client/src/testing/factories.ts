@@ -1,4 +1,10 @@
-import type { CreatedInvite, CurrentUser, PendingInvite, TeamMember } from '@pondwright/shared';
+import type {
+  CompanyProfile,
+  CreatedInvite,
+  CurrentUser,
+  PendingInvite,
+  TeamMember,
+} from '@pondwright/shared';
 
 let sequence = 0;
 const nextId = () => `00000000-0000-4000-8000-${String(++sequence).padStart(12, '0')}`;
@@ -44,6 +50,15 @@ export function buildCreatedInvite(overrides: Partial<CreatedInvite> = {}): Crea
   return {
     ...buildInvite(overrides),
     inviteUrl: '/accept-invite/tok-123',
+    ...overrides,
+  };
+}
+
+export function buildCompany(overrides: Partial<CompanyProfile> = {}): CompanyProfile {
+  return {
+    id: 'company-1',
+    name: 'Example Ponds Co',
+    unitSystem: 'us',
     ...overrides,
   };
 }

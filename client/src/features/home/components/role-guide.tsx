@@ -9,6 +9,8 @@ const GUIDES: Record<Role, Guide> = {
     today: [
       'Invite estimators, crew leads and other owners from Team.',
       'Change anyone’s role, and switch off access for people who leave.',
+      'Measure a pond on Takeoff and get its volume, liner, dig, rock, pump, lighting and labor.',
+      'Set the company name and the units new takeoffs start in from Company.',
     ],
     next: [
       'Set what a crew-day costs you, your markup rules and your own price book.',
@@ -16,10 +18,13 @@ const GUIDES: Record<Role, Guide> = {
     ],
   },
   estimator: {
-    today: ['Your account is ready. A company owner looks after who is on the team.'],
+    today: [
+      'Measure a pond on Takeoff and get its volume, liner, dig, rock, pump head, lighting and labor, in US or metric units.',
+      'A company owner looks after who is on the team.',
+    ],
     next: [
       'Capture site visits: measurements, access, utilities, soil and photos.',
-      'Run takeoffs for rock, gravel, liner, volume and pump head, then build quotes with options and exclusions.',
+      'Save takeoffs to estimates, then build quotes with options and exclusions.',
     ],
   },
   crew_lead: {

@@ -1,16 +1,9 @@
-import {
-  Group,
-  Input,
-  NumberInput,
-  SegmentedControl,
-  SimpleGrid,
-  Stack,
-  Table,
-  Text,
-} from '@mantine/core';
+import { Group, Input, SegmentedControl, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import { INPUT_LIMITS, type OutlineInput } from '@pondwright/shared/engine';
 import { NEW_PART } from '../utils/default-input';
+import { measurementUnit } from '../utils/measurement';
 import { AddButton, GroupError, PartFieldset, RemoveButton } from './form-parts';
+import { MeasurementInput } from './measurement-input';
 import { inputId, useTakeoffField } from './takeoff-form-context';
 
 const SHAPES = [
@@ -67,19 +60,20 @@ function changeShape(outline: OutlineInput, shape: OutlineInput['shape']): Outli
 type Point = { xFt: number; yFt: number };
 
 function OutlinePoints({ path, points }: { path: string; points: Point[] }) {
-  const { form, field } = useTakeoffField();
+  const { form, system } = useTakeoffField();
   const pointsPath = `${path}.pointsFt`;
+  const unit = measurementUnit('ft', system);
   return (
     <Stack gap={4}>
       <Text size="sm" fw={500}>
-        Outline points (ft), in order around the edge
+        Outline points ({unit}), in order around the edge
       </Text>
       <Table withRowBorders={false} verticalSpacing={4} highlightOnHover={false}>
         <Table.Thead>
           <Table.Tr>
             <Table.Th w={40}>#</Table.Th>
-            <Table.Th>x (ft)</Table.Th>
-            <Table.Th>y (ft)</Table.Th>
+            <Table.Th>x ({unit})</Table.Th>
+            <Table.Th>y ({unit})</Table.Th>
             <Table.Th w={40} />
           </Table.Tr>
         </Table.Thead>
@@ -92,19 +86,21 @@ function OutlinePoints({ path, points }: { path: string; points: Point[] }) {
                 </Text>
               </Table.Td>
               <Table.Td>
-                <NumberInput
+                <MeasurementInput
                   size="sm"
-                  hideControls
-                  aria-label={`Point ${k + 1} x (ft)`}
-                  {...field(`${pointsPath}.${k}.xFt`, { label: null })}
+                  path={`${pointsPath}.${k}.xFt`}
+                  kind="ft"
+                  label={null}
+                  aria-label={`Point ${k + 1} x (${unit})`}
                 />
               </Table.Td>
               <Table.Td>
-                <NumberInput
+                <MeasurementInput
                   size="sm"
-                  hideControls
-                  aria-label={`Point ${k + 1} y (ft)`}
-                  {...field(`${pointsPath}.${k}.yFt`, { label: null })}
+                  path={`${pointsPath}.${k}.yFt`}
+                  kind="ft"
+                  label={null}
+                  aria-label={`Point ${k + 1} y (${unit})`}
                 />
               </Table.Td>
               <Table.Td>
@@ -142,8 +138,9 @@ function OutlinePoints({ path, points }: { path: string; points: Point[] }) {
 type Shelf = { widthIn: number; depthIn: number };
 
 function Shelves({ basinPath, shelves }: { basinPath: string; shelves: Shelf[] }) {
-  const { form, field } = useTakeoffField();
+  const { form, system } = useTakeoffField();
   const shelvesPath = `${basinPath}.shelves`;
+  const unit = measurementUnit('in', system);
   return (
     <Stack gap={4}>
       <Text size="sm" fw={500}>
@@ -158,8 +155,8 @@ function Shelves({ basinPath, shelves }: { basinPath: string; shelves: Shelf[] }
           <Table.Thead>
             <Table.Tr>
               <Table.Th w={40}>#</Table.Th>
-              <Table.Th>Width (in)</Table.Th>
-              <Table.Th>Depth below water (in)</Table.Th>
+              <Table.Th>Width ({unit})</Table.Th>
+              <Table.Th>Depth below water ({unit})</Table.Th>
               <Table.Th w={40} />
             </Table.Tr>
           </Table.Thead>
@@ -172,19 +169,21 @@ function Shelves({ basinPath, shelves }: { basinPath: string; shelves: Shelf[] }
                   </Text>
                 </Table.Td>
                 <Table.Td>
-                  <NumberInput
+                  <MeasurementInput
                     size="sm"
-                    hideControls
-                    aria-label={`Shelf ${k + 1} width (in)`}
-                    {...field(`${shelvesPath}.${k}.widthIn`, { label: null })}
+                    path={`${shelvesPath}.${k}.widthIn`}
+                    kind="in"
+                    label={null}
+                    aria-label={`Shelf ${k + 1} width (${unit})`}
                   />
                 </Table.Td>
                 <Table.Td>
-                  <NumberInput
+                  <MeasurementInput
                     size="sm"
-                    hideControls
-                    aria-label={`Shelf ${k + 1} depth below water (in)`}
-                    {...field(`${shelvesPath}.${k}.depthIn`, { label: null })}
+                    path={`${shelvesPath}.${k}.depthIn`}
+                    kind="in"
+                    label={null}
+                    aria-label={`Shelf ${k + 1} depth below water (${unit})`}
                   />
                 </Table.Td>
                 <Table.Td>
@@ -239,12 +238,12 @@ function BasinFields({ index, onRemove }: { index: number; onRemove: () => void 
           <OutlinePoints path={outlinePath} points={basin.outline.pointsFt} />
         ) : (
           <SimpleGrid cols={2} spacing="sm">
-            <NumberInput hideControls {...field(`${outlinePath}.lengthFt`)} />
-            <NumberInput hideControls {...field(`${outlinePath}.widthFt`)} />
+            <MeasurementInput path={`${outlinePath}.lengthFt`} kind="ft" />
+            <MeasurementInput path={`${outlinePath}.widthFt`} kind="ft" />
           </SimpleGrid>
         )}
         <SimpleGrid cols={{ base: 1, xs: 2 }} spacing="sm">
-          <NumberInput hideControls {...field(`${path}.maxDepthFt`)} />
+          <MeasurementInput path={`${path}.maxDepthFt`} kind="ft" />
           <Input.Wrapper
             label="Walls"
             id={inputId(`${path}.wallStyle`)}

@@ -2,6 +2,7 @@ import { Group, NumberInput, Select, SimpleGrid, Stack, Text } from '@mantine/co
 import { CABLE_GAUGES_AWG } from '@pondwright/shared/engine';
 import { NEW_PART } from '../utils/default-input';
 import { AddButton, GroupError, PartFieldset, RemoveButton } from './form-parts';
+import { MeasurementInput } from './measurement-input';
 import { useTakeoffField } from './takeoff-form-context';
 
 const GAUGES = CABLE_GAUGES_AWG.map((gauge) => ({ value: gauge, label: `${gauge} AWG` }));
@@ -59,7 +60,7 @@ export function LightingFields() {
         >
           <Stack gap="sm">
             <SimpleGrid cols={2} spacing="sm">
-              <NumberInput hideControls {...field(`lighting.${i}.cableLengthFt`)} />
+              <MeasurementInput path={`lighting.${i}.cableLengthFt`} kind="ft" />
               <Select data={GAUGES} allowDeselect={false} {...field(`lighting.${i}.gaugeAwg`)} />
             </SimpleGrid>
             <Fixtures runIndex={i} watts={run.fixtureWatts} />

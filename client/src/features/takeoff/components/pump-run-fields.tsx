@@ -1,6 +1,7 @@
 import { NumberInput, Select, SimpleGrid, Stack, Switch, Text } from '@mantine/core';
 import { defaultEngineParameters } from '@pondwright/shared/engine';
 import { NEW_PART } from '../utils/default-input';
+import { MeasurementInput } from './measurement-input';
 import { useTakeoffField } from './takeoff-form-context';
 
 const PIPES = defaultEngineParameters.hydraulics.pipes;
@@ -52,15 +53,15 @@ export function PumpRunFields() {
         <>
           <Select data={MATERIALS} allowDeselect={false} {...field('pumpRun.pipeMaterial')} />
           <SimpleGrid cols={2} spacing="sm">
-            <NumberInput hideControls {...field('pumpRun.pressurePipeLengthFt')} />
+            <MeasurementInput path="pumpRun.pressurePipeLengthFt" kind="ft" />
             <PipeSizeSelect path="pumpRun.pressurePipeSizeIn" material={run.pipeMaterial} />
-            <NumberInput hideControls {...field('pumpRun.suctionPipeLengthFt')} />
+            <MeasurementInput path="pumpRun.suctionPipeLengthFt" kind="ft" />
             <PipeSizeSelect path="pumpRun.suctionPipeSizeIn" material={run.pipeMaterial} />
           </SimpleGrid>
           <Text size="xs" c="dimmed">
             Auto picks the smallest size that keeps the water within the velocity limits.
           </Text>
-          <NumberInput hideControls {...field('pumpRun.elevationFt')} />
+          <MeasurementInput path="pumpRun.elevationFt" kind="ft" />
           <Text size="sm" fw={500}>
             Fittings on the run
           </Text>

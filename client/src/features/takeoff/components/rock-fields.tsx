@@ -1,13 +1,15 @@
 import { NumberInput, SimpleGrid, Stack, Text } from '@mantine/core';
 import { BOULDER_SIZES, defaultEngineParameters } from '@pondwright/shared/engine';
+import { formatMeasurement } from '../utils/measurement';
 import { GroupError } from './form-parts';
+import { MeasurementInput } from './measurement-input';
 import { useTakeoffField } from './takeoff-form-context';
 
 const SIZE_IN = defaultEngineParameters.rock.boulderSizeIn;
 const SIZE_NAMES = { small: 'Small', medium: 'Medium', large: 'Large' } as const;
 
 export function RockFields() {
-  const { form, field } = useTakeoffField();
+  const { form, field, system } = useTakeoffField();
   const mix = form.getValues().rock.boulderMixPct;
   const total = BOULDER_SIZES.reduce((sum, size) => sum + (Number(mix[size]) || 0), 0);
   return (
@@ -24,7 +26,7 @@ export function RockFields() {
             key={size}
             hideControls
             {...field(`rock.boulderMixPct.${size}`, {
-              label: `${SIZE_NAMES[size]}, ${SIZE_IN[size]} in (%)`,
+              label: `${SIZE_NAMES[size]}, ${formatMeasurement(SIZE_IN[size], 'in', system)} (%)`,
             })}
           />
         ))}
@@ -42,9 +44,9 @@ export function RockFields() {
         Gravel depth
       </Text>
       <SimpleGrid cols={3} spacing="sm">
-        <NumberInput hideControls {...field('rock.floorGravelDepthIn')} />
-        <NumberInput hideControls {...field('rock.shelfGravelDepthIn')} />
-        <NumberInput hideControls {...field('rock.streamGravelDepthIn')} />
+        <MeasurementInput path="rock.floorGravelDepthIn" kind="in" />
+        <MeasurementInput path="rock.shelfGravelDepthIn" kind="in" />
+        <MeasurementInput path="rock.streamGravelDepthIn" kind="in" />
       </SimpleGrid>
     </Stack>
   );

@@ -10,7 +10,9 @@ import {
 } from '@mantine/core';
 import { defaultEngineParameters, SOIL_TYPES } from '@pondwright/shared/engine';
 import { NEW_PART } from '../utils/default-input';
+import { formatMeasurement } from '../utils/measurement';
 import { PartFieldset } from './form-parts';
+import { MeasurementInput } from './measurement-input';
 import { inputId, useTakeoffField } from './takeoff-form-context';
 
 const SOILS = SOIL_TYPES.map((soil) => ({
@@ -32,29 +34,29 @@ const METHODS = [
 const MACHINE_MIN_ACCESS_IN = defaultEngineParameters.excavation.machineMinAccessWidthIn;
 
 export function SiteFields() {
-  const { form, field } = useTakeoffField();
+  const { form, field, system } = useTakeoffField();
   const methodPath = 'site.excavationMethod';
   return (
     <Stack gap="sm">
       <SimpleGrid cols={2} spacing="sm">
         <Select data={SOILS} allowDeselect={false} {...field('site.soil')} />
         <NumberInput hideControls {...field('site.slopePct')} />
-        <NumberInput
-          hideControls
+        <MeasurementInput
+          path="site.accessWidthIn"
+          kind="in"
           description="Gate or gap the crew and machine pass"
-          {...field('site.accessWidthIn')}
         />
-        <NumberInput
-          hideControls
+        <MeasurementInput
+          path="site.carryDistanceFt"
+          kind="ft"
           description="From where trucks can dump"
-          {...field('site.carryDistanceFt')}
         />
       </SimpleGrid>
       <Input.Wrapper
         label="Digging"
         id={inputId(methodPath)}
         labelElement="div"
-        description={`"By access" digs by machine when the access is at least ${MACHINE_MIN_ACCESS_IN} in wide.`}
+        description={`"By access" digs by machine when the access is at least ${formatMeasurement(MACHINE_MIN_ACCESS_IN, 'in', system)} wide.`}
         error={field(methodPath).error}
       >
         <SegmentedControl
@@ -102,8 +104,8 @@ export function RenovationFields() {
               description="The basins are reused as they are and not dug again."
             />
             <SimpleGrid cols={2} spacing="sm">
-              <NumberInput hideControls {...field('renovation.oldLinerAreaSqFt')} />
-              <NumberInput hideControls {...field('renovation.oldRockShortTons')} />
+              <MeasurementInput path="renovation.oldLinerAreaSqFt" kind="sqFt" />
+              <MeasurementInput path="renovation.oldRockShortTons" kind="shortTon" />
               <NumberInput hideControls {...field('renovation.rockReusedPct')} />
             </SimpleGrid>
           </Stack>

@@ -18,8 +18,8 @@ export function inputId(path: string): string {
 const lastSegment = (path: string) => path.slice(path.lastIndexOf('.') + 1);
 
 /**
- * The form and a `field(path)` helper giving an input its value, change handler, label (with the
- * unit) and the engine's message for that path.
+ * The form, the unit system its measurements are shown in, and a `field(path)` helper giving an
+ * input its value, change handler, label (with the US unit) and the engine's message for that path.
  */
 export function useTakeoffField() {
   const form = useTakeoffFormContext();
@@ -30,5 +30,5 @@ export function useTakeoffField() {
     error: errors[path],
     label: options.label === null ? undefined : (options.label ?? FIELD_LABELS[lastSegment(path)]),
   });
-  return { form, errors, field };
+  return { form, errors, field, system: form.getValues().unitSystem };
 }

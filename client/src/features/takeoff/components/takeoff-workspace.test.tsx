@@ -14,6 +14,7 @@ function defaultTakeoff(): Takeoff {
 }
 
 const figure = (name: string) => screen.findByRole('article', { name });
+const inBasin1 = () => within(screen.getByRole('group', { name: /^Basin 1/ }));
 
 async function volumeGallons(): Promise<number> {
   const card = await figure('Water volume');
@@ -56,13 +57,6 @@ describe('TakeoffWorkspace', () => {
     await user.clear(depth);
     await user.type(depth, '-1');
 
-    await new Promise((r) => setTimeout(r, 1000));
-    console.log(
-      'VALUE',
-      (depth as HTMLInputElement).value,
-      depth.getAttribute('aria-invalid'),
-      document.getElementById(depth.getAttribute('aria-describedby') ?? '')?.textContent,
-    );
     await waitFor(() => expect(depth).toHaveAccessibleDescription('Must be more than 0 ft.'));
     expect(depth).toHaveAttribute('aria-invalid', 'true');
     const summary = screen.getByRole('alert', { name: 'One field needs another look' });
@@ -77,6 +71,63 @@ describe('TakeoffWorkspace', () => {
     await user.click(screen.getByRole('radio', { name: 'Metric' }));
 
     await waitFor(async () => expect(await figure('Water volume')).toHaveTextContent('5,018 L'));
+  });
+
+  it('takes metric entries and converts them exactly: 4.572 m holds what 15 ft holds', async () => {
+    const { user } = renderWithProviders(<TakeoffWorkspace unitSystem="metric" />);
+    expect(await figure('Water volume')).toHaveTextContent('5,018 L');
+
+    const length = inBasin1().getByLabelText('Length (m)');
+    expect(length).toHaveValue('4.57');
+    expect(inBasin1().getByLabelText('Max depth (m)')).toHaveValue('0.61');
+    expect(inBasin1().getByLabelText('Shelf 1 width (cm)')).toHaveValue('30.5');
+
+    await user.clear(length);
+    await user.type(length, '6');
+    await waitFor(async () => expect(await figure('Water volume')).toHaveTextContent('6,912 L'));
+
+    await user.clear(length);
+    await user.type(length, '4.572');
+    await waitFor(async () => expect(await figure('Water volume')).toHaveTextContent('5,018 L'));
+
+    await user.click(screen.getByRole('radio', { name: 'US units' }));
+    await waitFor(async () => expect(await figure('Water volume')).toHaveTextContent('1,326 gal'));
+    expect(inBasin1().getByLabelText('Length (ft)')).toHaveValue('15');
+  });
+
+  it('switches systems back and forth without changing the stored measurements', async () => {
+    setAccessToken('t');
+    const server = mockApi({ 'POST /api/takeoff': json(defaultTakeoff()) });
+    const { user } = renderWithProviders(<TakeoffWorkspace />);
+    await figure('Water volume');
+    const us = () => user.click(screen.getByRole('radio', { name: 'US units' }));
+    const metric = () => user.click(screen.getByRole('radio', { name: 'Metric' }));
+
+    await metric();
+    expect(inBasin1().getByLabelText('Length (m)')).toHaveValue('4.57');
+    await us();
+    expect(inBasin1().getByLabelText('Length (ft)')).toHaveValue('15');
+    await metric();
+    await us();
+    await waitFor(async () => expect(await figure('Water volume')).toHaveTextContent('1,326 gal'));
+
+    await user.click(screen.getByRole('button', { name: 'Check on server' }));
+    expect(await screen.findByText('The server agrees')).toBeInTheDocument();
+    expect(server.callsTo('POST /api/takeoff')[0]?.body).toEqual(DEFAULT_TAKEOFF_INPUT);
+  });
+
+  it('keeps a metric entry as typed across a switch to US and back', async () => {
+    const { user } = renderWithProviders(<TakeoffWorkspace unitSystem="metric" />);
+    await figure('Water volume');
+
+    const width = inBasin1().getByLabelText('Width (m)');
+    await user.clear(width);
+    await user.type(width, '2');
+    await user.click(screen.getByRole('radio', { name: 'US units' }));
+    expect(inBasin1().getByLabelText('Width (ft)')).toHaveValue('6.56');
+    await user.click(screen.getByRole('radio', { name: 'Metric' }));
+
+    expect(inBasin1().getByLabelText('Width (m)')).toHaveValue('2');
   });
 
   it('explains a figure from its (?) button', async () => {

@@ -11,7 +11,7 @@ import {
   useMantineTheme,
   useMatches,
 } from '@mantine/core';
-import type { TakeoffInput } from '@pondwright/shared/engine';
+import type { TakeoffInput, UnitSystem } from '@pondwright/shared/engine';
 import { useCallback, useMemo, useState } from 'react';
 import { anyOutlineBendsInward, usePolygonInset } from '../hooks/use-polygon-inset';
 import { useTakeoffPreview } from '../hooks/use-takeoff-preview';
@@ -45,16 +45,21 @@ function findFieldElement(field: string): HTMLElement | null {
   return null;
 }
 
+type TakeoffWorkspaceProps = {
+  initialValues?: TakeoffInput;
+  /** The units the screen starts in (the company's default); one switch sets entry and results. */
+  unitSystem?: UnitSystem;
+};
+
 /** The takeoff screen: measurements on the left, the engine's figures on the right as they are typed. */
 export function TakeoffWorkspace({
   initialValues = DEFAULT_TAKEOFF_INPUT,
-}: {
-  initialValues?: TakeoffInput;
-}) {
+  unitSystem = initialValues.unitSystem,
+}: TakeoffWorkspaceProps) {
   const theme = useMantineTheme();
   const form = useTakeoffForm({
     mode: 'controlled',
-    initialValues: JSON.parse(JSON.stringify(initialValues)) as TakeoffInput,
+    initialValues: { ...(JSON.parse(JSON.stringify(initialValues)) as TakeoffInput), unitSystem },
   });
   const values = form.getValues();
   const polygons = usePolygonInset(anyOutlineBendsInward(values));
@@ -110,15 +115,11 @@ export function TakeoffWorkspace({
                       </Group>
                       <SegmentedControl
                         size="xs"
-                        aria-label="Show results in"
+                        aria-label="Units for measurements and results"
                         data={UNIT_SYSTEMS}
                         {...form.getInputProps('unitSystem')}
                       />
                     </Group>
-                    <Text size="xs" c="dimmed">
-                      Enter measurements in US units (ft, in) for now; the switch changes only how
-                      the results are shown.
-                    </Text>
                     <ServerCheck
                       input={engineInput}
                       geometry={polygons.geometry}

@@ -1,15 +1,7 @@
-import {
-  Input,
-  NumberInput,
-  Select,
-  SegmentedControl,
-  SimpleGrid,
-  Stack,
-  Switch,
-  Text,
-} from '@mantine/core';
+import { Input, Select, SegmentedControl, SimpleGrid, Stack, Switch, Text } from '@mantine/core';
 import { NEW_PART } from '../utils/default-input';
 import { AddButton, GroupError, PartFieldset } from './form-parts';
+import { MeasurementInput } from './measurement-input';
 import { inputId, useTakeoffField } from './takeoff-form-context';
 
 const SHEETS = [
@@ -24,7 +16,7 @@ const FILLS = [
 ];
 
 function Streams() {
-  const { form, field } = useTakeoffField();
+  const { form } = useTakeoffField();
   const streams = form.getValues().streams;
   return (
     <Stack gap="sm">
@@ -35,9 +27,9 @@ function Streams() {
           onRemove={() => form.removeListItem('streams', i)}
         >
           <SimpleGrid cols={3} spacing="sm">
-            <NumberInput hideControls {...field(`streams.${i}.lengthFt`)} />
-            <NumberInput hideControls {...field(`streams.${i}.widthFt`)} />
-            <NumberInput hideControls {...field(`streams.${i}.dropFt`)} />
+            <MeasurementInput path={`streams.${i}.lengthFt`} kind="ft" />
+            <MeasurementInput path={`streams.${i}.widthFt`} kind="ft" />
+            <MeasurementInput path={`streams.${i}.dropFt`} kind="ft" />
           </SimpleGrid>
         </PartFieldset>
       ))}
@@ -62,7 +54,7 @@ function Waterfalls() {
             onRemove={() => form.removeListItem('waterfalls', i)}
           >
             <SimpleGrid cols={2} spacing="sm">
-              <NumberInput hideControls {...field(`waterfalls.${i}.weirWidthIn`)} />
+              <MeasurementInput path={`waterfalls.${i}.weirWidthIn`} kind="in" />
               <Input.Wrapper
                 label="Sheet of water"
                 id={inputId(sheetPath)}
@@ -106,9 +98,9 @@ function PondFreeBasin() {
       {box && (
         <PartFieldset legend="Pond-free basin">
           <SimpleGrid cols={2} spacing="sm">
-            <NumberInput hideControls {...field('pondFreeBasin.lengthFt')} />
-            <NumberInput hideControls {...field('pondFreeBasin.widthFt')} />
-            <NumberInput hideControls {...field('pondFreeBasin.depthFt')} />
+            <MeasurementInput path="pondFreeBasin.lengthFt" kind="ft" />
+            <MeasurementInput path="pondFreeBasin.widthFt" kind="ft" />
+            <MeasurementInput path="pondFreeBasin.depthFt" kind="ft" />
             <Select data={FILLS} allowDeselect={false} {...field('pondFreeBasin.fill')} />
           </SimpleGrid>
         </PartFieldset>

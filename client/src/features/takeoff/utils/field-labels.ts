@@ -1,6 +1,9 @@
-/** Input labels by field name, with the unit the engine expects. The form and the error summary share them. */
+/**
+ * Input labels by field name, with the unit the engine expects. The form and the error summary share
+ * them; a measurement input swaps in the metric unit when the form is in metric.
+ */
 export const FIELD_LABELS: Record<string, string> = {
-  unitSystem: 'Show results in',
+  unitSystem: 'Units',
   shape: 'Outline',
   lengthFt: 'Length (ft)',
   widthFt: 'Width (ft)',

@@ -1,4 +1,5 @@
 import { defaultEngineParameters, type TakeoffInput } from '@pondwright/shared/engine';
+import { formatMeasurement, formatShownNumber } from './measurement';
 
 export const FORM_SECTIONS = [
   { value: 'basins', title: 'Basins', fields: ['basins'] },
@@ -26,8 +27,10 @@ export function sectionOf(path: string): FormSection | null {
 const plural = (count: number, one: string, many = `${one}s`) =>
   `${count} ${count === 1 ? one : many}`;
 
-/** A one-line reminder of what a closed section holds. */
+/** A one-line reminder of what a closed section holds, in the form's unit system. */
 export function sectionSummary(section: FormSection, values: TakeoffInput): string {
+  const system = values.unitSystem;
+  const ft = (value: unknown) => formatMeasurement(value, 'ft', system);
   switch (section) {
     case 'basins': {
       const [first] = values.basins;
@@ -36,8 +39,8 @@ export function sectionSummary(section: FormSection, values: TakeoffInput): stri
       const plan =
         first.outline.shape === 'freeform'
           ? `freeform, ${first.outline.pointsFt.length} points`
-          : `${first.outline.shape} ${first.outline.lengthFt} × ${first.outline.widthFt} ft`;
-      return `${plan}, ${first.maxDepthFt} ft deep, ${plural(first.shelves.length, 'shelf', 'shelves')}`;
+          : `${first.outline.shape} ${formatShownNumber(first.outline.lengthFt, 'ft', system)} × ${ft(first.outline.widthFt)}`;
+      return `${plan}, ${ft(first.maxDepthFt)} deep, ${plural(first.shelves.length, 'shelf', 'shelves')}`;
     }
     case 'water': {
       const parts = [
@@ -49,7 +52,7 @@ export function sectionSummary(section: FormSection, values: TakeoffInput): stri
     }
     case 'pump':
       return values.pumpRun
-        ? `${values.pumpRun.pressurePipeLengthFt} ft of pipe, ${values.pumpRun.elevationFt} ft lift`
+        ? `${ft(values.pumpRun.pressurePipeLengthFt)} of pipe, ${ft(values.pumpRun.elevationFt)} lift`
         : 'None';
     case 'rock': {
       const mix = values.rock.boulderMixPct;
@@ -63,7 +66,8 @@ export function sectionSummary(section: FormSection, values: TakeoffInput): stri
     case 'site': {
       const soil =
         defaultEngineParameters.soils[values.site.soil]?.label ?? String(values.site.soil);
-      return `${soil}, ${values.site.accessWidthIn} in access${values.renovation ? ', renovation' : ''}`;
+      const access = formatMeasurement(values.site.accessWidthIn, 'in', system);
+      return `${soil}, ${access} access${values.renovation ? ', renovation' : ''}`;
     }
     case 'crew':
       return `${plural(Number(values.crew.size) || 0, 'person', 'people')} × ${values.crew.hoursPerDay} h`;

@@ -1,0 +1,48 @@
+import { Paper } from '@mantine/core';
+import { useQueryClient } from '@tanstack/react-query';
+import { ErrorPanel } from '@/components/error-panel';
+import { PageHeader } from '@/components/page-header';
+import { PageLoader } from '@/components/page-loader';
+import { currentUserQueryKey } from '@/features/auth/api/get-current-user';
+import { RequireRole } from '@/features/auth/components/require-role';
+import { useCompany } from '@/features/company/api/get-company';
+import { CompanyForm } from '@/features/company/components/company-form';
+
+function CompanyPage() {
+  const company = useCompany();
+  const queryClient = useQueryClient();
+
+  return (
+    <>
+      <PageHeader
+        title="Company"
+        description="Your company’s name, and the units new takeoffs start in."
+      />
+      {company.isPending ? (
+        <PageLoader label="Loading the company…" />
+      ) : company.isError ? (
+        <ErrorPanel
+          title="Could not load the company"
+          error={company.error}
+          onRetry={() => void company.refetch()}
+        />
+      ) : (
+        <Paper p="lg" maw={560}>
+          <CompanyForm
+            company={company.data}
+            // The header shows the company name from the signed-in user.
+            onSaved={() => queryClient.invalidateQueries({ queryKey: currentUserQueryKey })}
+          />
+        </Paper>
+      )}
+    </>
+  );
+}
+
+export function CompanyRoute() {
+  return (
+    <RequireRole area="company" areaName="company settings">
+      <CompanyPage />
+    </RequireRole>
+  );
+}
