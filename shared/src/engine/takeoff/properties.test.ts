@@ -93,8 +93,10 @@ describe('properties', () => {
         const a = headline(small.takeoff);
         const b = headline(large.takeoff);
         for (const key of Object.keys(a) as Array<keyof typeof a>) {
-          // rounding of equal quantities may differ in the last place of rounding only
-          expect(b[key]).toBeGreaterThanOrEqual(a[key] - 0.051);
+          // Equal quantities may differ by one step of their rounding (labor hours, the coarsest, to
+          // 0.1 h), and freeform insets by clipper-lib's 0.01 ft grid, which can shift a barely larger
+          // outline's area by a few parts in 100,000.
+          expect(b[key]).toBeGreaterThanOrEqual(a[key] * (1 - 1e-4) - 0.1);
         }
       }),
       { numRuns: 150 },
