@@ -12,6 +12,7 @@ export const aliases = [
     find: /^@pondwright\/shared\/engine\/polygon-inset$/,
     replacement: fromHere('../shared/src/engine/polygon-inset.ts'),
   },
+  { find: /^@pondwright\/shared\/pricing$/, replacement: fromHere('../shared/src/pricing/index.ts') },
   { find: /^@pondwright\/shared$/, replacement: fromHere('../shared/src/index.ts') },
 ];
 
