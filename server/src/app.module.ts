@@ -17,6 +17,8 @@ import { AppConfigModule } from './config/app-config.module';
 import { dataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { InvitesModule } from './invites/invites.module';
+import { PriceBookModule } from './price-book/price-book.module';
+import { PricedTakeoffsModule } from './priced-takeoffs/priced-takeoffs.module';
 import { TakeoffModule } from './takeoff/takeoff.module';
 import { UsersModule } from './users/users.module';
 
@@ -56,6 +58,8 @@ import { UsersModule } from './users/users.module';
     InvitesModule,
     HealthModule,
     TakeoffModule,
+    PriceBookModule,
+    PricedTakeoffsModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     ServeStaticModule.forRootAsync({
       inject: [AppConfig],

@@ -8,6 +8,8 @@ import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { createValidationPipe } from './common/validation/validation-pipe';
 import { AppConfig } from './config/app-config';
 
+const PRICE_BOOK_IMPORT_PATH = '/api/price-book/import';
+
 /** Nest's own body parser stays off: configureApp installs one whose errors keep the API's error shape. */
 export const NEST_APP_OPTIONS = { bodyParser: false } as const;
 
@@ -20,6 +22,8 @@ export function configureApp(app: NestExpressApplication): void {
   app.disable('x-powered-by');
   const errors = new ApiExceptionFilter();
   // Nest's own body parser is off (see createApp) so that parse errors reach our error shape.
+  // A price-book CSV import is the one larger body: a full book (5,000 materials) runs to a few MB.
+  app.use(PRICE_BOOK_IMPORT_PATH, json({ limit: '5mb' }));
   app.use(json({ limit: '1mb' }));
   app.use(errors.middleware);
   app.use(cookieParser());

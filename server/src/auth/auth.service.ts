@@ -6,6 +6,7 @@ import { DataSource, type EntityManager } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { Company } from '../companies/entities/company.entity';
 import { InvitesService } from '../invites/invites.service';
+import { addStarterPriceBook } from '../price-book/starter-price-book';
 import { User } from '../users/entities/user.entity';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER, type AccessTokenClaims } from './access-tokens';
 import type { AcceptInviteDto, LoginDto, SignupDto } from './dto/auth.dto';
@@ -31,7 +32,7 @@ export class AuthService {
     private readonly invites: InvitesService,
   ) {}
 
-  /** Creates a company and its first owner, and signs the owner in. */
+  /** Creates a company, its first owner and its starter price book, and signs the owner in. */
   async signup(input: SignupDto): Promise<Session> {
     const passwordHash = await hashPassword(input.password);
     return this.dataSource.transaction(async (manager) => {
@@ -46,6 +47,7 @@ export class AuthService {
           passwordHash,
         }),
       );
+      await addStarterPriceBook(manager, company.id, user.id);
       return this.startSession(user, manager);
     });
   }

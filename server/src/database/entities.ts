@@ -2,6 +2,16 @@ import { LoginFailure } from '../auth/entities/login-failure.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { Company } from '../companies/entities/company.entity';
 import { Invite } from '../invites/entities/invite.entity';
+import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
+import { PricedTakeoff } from '../priced-takeoffs/entities/priced-takeoff.entity';
 import { User } from '../users/entities/user.entity';
 
-export const entities = [Company, User, Invite, RefreshToken, LoginFailure];
+export const entities = [
+  Company,
+  User,
+  Invite,
+  RefreshToken,
+  LoginFailure,
+  PriceBookVersion,
+  PricedTakeoff,
+];

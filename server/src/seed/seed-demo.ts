@@ -1,12 +1,14 @@
 import type { DataSource } from 'typeorm';
 import { hashPassword } from '../auth/passwords';
 import { Company } from '../companies/entities/company.entity';
+import { addStarterPriceBook } from '../price-book/starter-price-book';
 import { User } from '../users/entities/user.entity';
 import { DEMO_COMPANY_NAME, DEMO_USERS } from './demo-data';
 
 /**
- * Adds the demo company and its people when they are missing. Idempotent: rows that exist are left
- * exactly as they are, so a user's changes (a new password, a renamed company) survive every restart.
+ * Adds the demo company, its people and its starter price book when they are missing. Idempotent: rows
+ * that exist are left exactly as they are, so a user's changes (a new password, a renamed company, a
+ * price book of their own) survive every restart.
  */
 export async function seedDemo(dataSource: DataSource): Promise<{ created: string[] }> {
   const created: string[] = [];
@@ -33,6 +35,8 @@ export async function seedDemo(dataSource: DataSource): Promise<{ created: strin
       );
       created.push(`user ${person.email}`);
     }
+    const demoOwner = await manager.findOneByOrFail(User, { email: DEMO_USERS[0]!.email });
+    if (await addStarterPriceBook(manager, companyId, demoOwner.id)) created.push('price book');
   });
   return { created };
 }

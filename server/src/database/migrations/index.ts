@@ -1,5 +1,12 @@
 import { Foundation1796083200000 } from './1796083200000-foundation';
 import { CompanyUnitSystem1796086800000 } from './1796086800000-company-unit-system';
+import { PriceBookVersions1796090400000 } from './1796090400000-price-book-versions';
+import { PricedTakeoffs1796094000000 } from './1796094000000-priced-takeoffs';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
-export const migrations = [Foundation1796083200000, CompanyUnitSystem1796086800000];
+export const migrations = [
+  Foundation1796083200000,
+  CompanyUnitSystem1796086800000,
+  PriceBookVersions1796090400000,
+  PricedTakeoffs1796094000000,
+];
