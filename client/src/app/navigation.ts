@@ -1,7 +1,9 @@
 import type { Role } from '@pondwright/shared';
 import {
+  IconBook2,
   IconBuildingStore,
   IconHome2,
+  IconReceipt2,
   IconRulerMeasure,
   IconUsersGroup,
 } from '@tabler/icons-react';
@@ -12,8 +14,15 @@ import { canAccess, type Area } from '@/lib/authorization';
 const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
   { label: 'Home', to: paths.home.getHref(), icon: IconHome2, area: 'home' },
   { label: 'Takeoff', to: paths.takeoff.getHref(), icon: IconRulerMeasure, area: 'takeoff' },
-  // Estimates, Price book and Jobs are added here, each with its own area in
-  // lib/authorization.ts, when their pages exist; links to missing pages are not shown.
+  {
+    label: 'Priced takeoffs',
+    to: paths.pricedTakeoffs.getHref(),
+    icon: IconReceipt2,
+    area: 'pricedTakeoffs',
+  },
+  { label: 'Price book', to: paths.priceBook.getHref(), icon: IconBook2, area: 'priceBook' },
+  // Estimates and Jobs are added here, each with its own area in lib/authorization.ts,
+  // when their pages exist; links to missing pages are not shown.
   { label: 'Team', to: paths.team.getHref(), icon: IconUsersGroup, area: 'team' },
   { label: 'Company', to: paths.company.getHref(), icon: IconBuildingStore, area: 'company' },
 ];

@@ -53,6 +53,25 @@ export function createAppRoutes(): RouteObject[] {
                 Component: (await import('./routes/app/takeoff')).TakeoffRoute,
               }),
             },
+            {
+              // Tables, the policy form and the CSV tools load with this chunk; charts load later still.
+              path: paths.priceBook.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/price-book')).PriceBookRoute,
+              }),
+            },
+            {
+              path: paths.pricedTakeoffs.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/priced-takeoffs')).PricedTakeoffsRoute,
+              }),
+            },
+            {
+              path: paths.pricedTakeoff.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/priced-takeoff')).PricedTakeoffRoute,
+              }),
+            },
           ],
         },
         { path: '*', Component: NotFoundRoute },

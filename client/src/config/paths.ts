@@ -3,6 +3,15 @@ export const paths = {
   team: { path: '/team', getHref: () => '/team' },
   company: { path: '/company', getHref: () => '/company' },
   takeoff: { path: '/takeoff', getHref: () => '/takeoff' },
+  priceBook: {
+    path: '/price-book/:tab?',
+    getHref: (tab?: string) => (tab ? `/price-book/${tab}` : '/price-book'),
+  },
+  pricedTakeoffs: { path: '/priced-takeoffs', getHref: () => '/priced-takeoffs' },
+  pricedTakeoff: {
+    path: '/priced-takeoffs/:id',
+    getHref: (id: string) => `/priced-takeoffs/${encodeURIComponent(id)}`,
+  },
   signIn: {
     path: '/sign-in',
     getHref: (next?: string | null) =>

@@ -96,10 +96,17 @@ export type RequestOptions = {
   method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
   body?: unknown;
   signal?: AbortSignal;
+  /** What the caller wants back; JSON unless a file is being downloaded. */
+  accept?: string;
 };
 
-function buildInit({ method = 'GET', body, signal }: RequestOptions): RequestInit {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+function buildInit({
+  method = 'GET',
+  body,
+  signal,
+  accept = 'application/json',
+}: RequestOptions): RequestInit {
+  const headers: Record<string, string> = { Accept: accept };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   return {
@@ -122,7 +129,7 @@ async function parseBody<T>(response: Response): Promise<T> {
  * access token once and retries; if the session cannot be renewed it clears the token
  * and hands over to the session-expired handler (the sign-in page with `next`).
  */
-export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+async function sendWithSession(path: string, options: RequestOptions): Promise<Response> {
   const url = `${API_BASE_PATH}${path}`;
   const tokenSent = accessToken;
   let response = await send(url, buildInit(options));
@@ -150,7 +157,24 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   }
 
   if (!response.ok) throw await toApiError(response);
-  return parseBody<T>(response);
+  return response;
+}
+
+export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  return parseBody<T>(await sendWithSession(path, options));
+}
+
+export type DownloadedFile = { blob: Blob; fileName: string | null };
+
+/**
+ * Fetches a file with the bearer token, which a plain link cannot send; the file name comes
+ * from the answer's Content-Disposition when the server gives one.
+ */
+export async function apiDownload(path: string, accept = '*/*'): Promise<DownloadedFile> {
+  const response = await sendWithSession(path, { method: 'GET', accept });
+  const disposition = response.headers.get('Content-Disposition') ?? '';
+  const fileName = /filename\*?=(?:UTF-8'')?"?([^";]+)"?/i.exec(disposition)?.[1] ?? null;
+  return { blob: await response.blob(), fileName: fileName && decodeURIComponent(fileName) };
 }
 
 export const api = {
@@ -160,6 +184,8 @@ export const api = {
     apiRequest<T>(path, { ...options, method: 'POST', body }),
   patch: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
     apiRequest<T>(path, { ...options, method: 'PATCH', body }),
+  put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'PUT', body }),
   delete: <T = void>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
     apiRequest<T>(path, { ...options, method: 'DELETE' }),
 };

@@ -6,6 +6,10 @@ export const AREA_ROLES = {
   team: ['owner'],
   company: ['owner'],
   takeoff: ['owner', 'estimator'],
+  priceBook: ['owner', 'estimator'],
+  /** Changing prices, the policy and the book's CSV; estimators read the book. */
+  priceBookEdit: ['owner'],
+  pricedTakeoffs: ['owner', 'estimator'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Area = keyof typeof AREA_ROLES;

@@ -1,7 +1,8 @@
 import { notifications } from '@mantine/notifications';
+import type { ReactNode } from 'react';
 import { errorMessage } from './api-error';
 
-export function notifySuccess(message: string, title?: string): void {
+export function notifySuccess(message: ReactNode, title?: string): void {
   notifications.show({ color: 'reed', title, message });
 }
 

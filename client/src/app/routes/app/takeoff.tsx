@@ -4,6 +4,7 @@ import { PageHeader } from '@/components/page-header';
 import { PageLoader } from '@/components/page-loader';
 import { RequireRole } from '@/features/auth/components/require-role';
 import { useCompany } from '@/features/company/api/get-company';
+import { SavePricedTakeoffButton } from '@/features/priced-takeoffs/components/save-priced-takeoff-button';
 import { TakeoffWorkspace } from '@/features/takeoff/components/takeoff-workspace';
 
 /** The takeoff starts in the company's units; without them it starts in US units rather than not at all. */
@@ -17,7 +18,10 @@ function TakeoffPage() {
           The company’s default units could not be loaded, so this takeoff starts in US units.
         </Alert>
       )}
-      <TakeoffWorkspace unitSystem={company.data?.unitSystem ?? 'us'} />
+      <TakeoffWorkspace
+        unitSystem={company.data?.unitSystem ?? 'us'}
+        renderActions={(input) => <SavePricedTakeoffButton input={input} />}
+      />
     </>
   );
 }

@@ -12,7 +12,7 @@ import {
   useMatches,
 } from '@mantine/core';
 import type { TakeoffInput, UnitSystem } from '@pondwright/shared/engine';
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useMemo, useState, type ReactNode } from 'react';
 import { anyOutlineBendsInward, usePolygonInset } from '../hooks/use-polygon-inset';
 import { useTakeoffPreview } from '../hooks/use-takeoff-preview';
 import { DEFAULT_TAKEOFF_INPUT } from '../utils/default-input';
@@ -49,12 +49,15 @@ type TakeoffWorkspaceProps = {
   initialValues?: TakeoffInput;
   /** The units the screen starts in (the company's default); one switch sets entry and results. */
   unitSystem?: UnitSystem;
+  /** Actions beside the result that need the takeoff as it stands, e.g. saving it with a price. */
+  renderActions?: (input: unknown) => ReactNode;
 };
 
 /** The takeoff screen: measurements on the left, the engine's figures on the right as they are typed. */
 export function TakeoffWorkspace({
   initialValues = DEFAULT_TAKEOFF_INPUT,
   unitSystem = initialValues.unitSystem,
+  renderActions,
 }: TakeoffWorkspaceProps) {
   const theme = useMantineTheme();
   const form = useTakeoffForm({
@@ -113,12 +116,15 @@ export function TakeoffWorkspace({
                         </Title>
                         {preview.updating && <Loader size="xs" aria-label="Updating" />}
                       </Group>
-                      <SegmentedControl
-                        size="xs"
-                        aria-label="Units for measurements and results"
-                        data={UNIT_SYSTEMS}
-                        {...form.getInputProps('unitSystem')}
-                      />
+                      <Group gap="xs">
+                        {renderActions?.(engineInput)}
+                        <SegmentedControl
+                          size="xs"
+                          aria-label="Units for measurements and results"
+                          data={UNIT_SYSTEMS}
+                          {...form.getInputProps('unitSystem')}
+                        />
+                      </Group>
                     </Group>
                     <ServerCheck
                       input={engineInput}

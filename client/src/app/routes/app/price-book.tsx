@@ -1,0 +1,45 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
+import { paths } from '@/config/paths';
+import { RequireRole } from '@/features/auth/components/require-role';
+import { useSignedInUser } from '@/features/auth/hooks/use-signed-in-user';
+import { PriceBookWorkspace } from '@/features/price-book/components/price-book-workspace';
+import { isPriceBookTab } from '@/features/price-book/utils/tabs';
+import { canAccess } from '@/lib/authorization';
+
+const PRICE_BOOK_ROOT = paths.priceBook.getHref();
+
+function PriceBookPage() {
+  const user = useSignedInUser();
+  const { tab } = useParams();
+  const navigate = useNavigate();
+  const readOnly = !canAccess(user.role, 'priceBookEdit');
+  return (
+    <>
+      <PageHeader
+        title="Price book"
+        description={
+          readOnly
+            ? 'What things cost the company and the margin it needs. Only owners change it.'
+            : 'What things cost the company and the margin it needs. Every save is a new version, so past estimates keep the prices they were made with.'
+        }
+      />
+      <PriceBookWorkspace
+        tab={isPriceBookTab(tab) ? tab : 'materials'}
+        onTabChange={(next) => navigate(paths.priceBook.getHref(next))}
+        readOnly={readOnly}
+        isWithinPage={(pathname) =>
+          pathname === PRICE_BOOK_ROOT || pathname.startsWith(`${PRICE_BOOK_ROOT}/`)
+        }
+      />
+    </>
+  );
+}
+
+export function PriceBookRoute() {
+  return (
+    <RequireRole area="priceBook" areaName="the price book">
+      <PriceBookPage />
+    </RequireRole>
+  );
+}

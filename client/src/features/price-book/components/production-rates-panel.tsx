@@ -1,0 +1,34 @@
+import { SimpleGrid, Text } from '@mantine/core';
+import type { ProductionRates } from '@pondwright/shared/pricing';
+import { NumberTextInput } from '@/components/number-text-input';
+import type { PriceBookDraft } from '../hooks/use-price-book-draft';
+import { PRODUCTION_RATE_LABELS } from '../utils/labels';
+
+type ProductionRatesPanelProps = { draft: PriceBookDraft; readOnly: boolean };
+
+/** How fast the crews work, which turns a takeoff's quantities into labor hours. */
+export function ProductionRatesPanel({ draft, readOnly }: ProductionRatesPanelProps) {
+  const rates = draft.draft.productionRates;
+  const keys = Object.keys(PRODUCTION_RATE_LABELS) as Array<keyof ProductionRates>;
+  return (
+    <>
+      <Text size="sm" c="dimmed" mb="md">
+        Tune these from your own finished jobs; every takeoff turns quantities into hours with them.
+      </Text>
+      <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="md">
+        {keys.map((key) => (
+          <NumberTextInput
+            key={key}
+            label={PRODUCTION_RATE_LABELS[key]}
+            readOnly={readOnly}
+            value={rates[key]}
+            error={draft.errors[`productionRates.${key}`]}
+            onChange={(value) =>
+              draft.update('productionRates', { ...rates, [key]: value } as ProductionRates)
+            }
+          />
+        ))}
+      </SimpleGrid>
+    </>
+  );
+}
