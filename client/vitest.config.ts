@@ -12,5 +12,7 @@ export default defineConfig({
     css: false,
     restoreMocks: true,
     unstubGlobals: true,
+    // jsdom with typed input is slow on a loaded 2-core machine; these tests check behaviour, not speed.
+    testTimeout: 20_000,
   },
 });

@@ -1,7 +1,7 @@
 import { NativeSelect, SimpleGrid, Stack, TextInput, Title } from '@mantine/core';
 import type { JobSettings, MaterialKind, PriceBook } from '@pondwright/shared/pricing';
 import type { PriceBookDraft } from '../hooks/use-price-book-draft';
-import { TASK_LABELS } from '../utils/labels';
+import { TASK_LABELS } from '@/lib/price-book-labels';
 
 type JobSettingsPanelProps = { draft: PriceBookDraft; readOnly: boolean };
 

@@ -7,7 +7,7 @@ import {
 } from '@pondwright/shared/pricing';
 import { lazy, Suspense } from 'react';
 import { NumberTextInput } from '@/components/number-text-input';
-import { ATTRIBUTE_LABELS, KIND_LABELS } from '../utils/labels';
+import { ATTRIBUTE_LABELS, KIND_LABELS } from '@/lib/price-book-labels';
 
 // The chart library is large and only pumps need it, so it loads when a pump is opened.
 const PumpCurveEditor = lazy(async () => ({

@@ -10,7 +10,7 @@ import { IconAdjustmentsHorizontal, IconChartLine } from '@tabler/icons-react';
 import { useState } from 'react';
 import { DataTable, type DataTableColumn } from '@/components/data-table';
 import type { PriceBookDraft } from '../hooks/use-price-book-draft';
-import { ATTRIBUTE_LABELS, KIND_LABELS } from '../utils/labels';
+import { ATTRIBUTE_LABELS, KIND_LABELS } from '@/lib/price-book-labels';
 import { MaterialDetailsModal } from './material-details-modal';
 import { codeColumn, moneyColumn, nameColumn } from './section-tables';
 

@@ -25,7 +25,7 @@ import { ApiError } from '@/lib/api-error';
 import { useSchemaForm } from '@/lib/form';
 import { notifyApiError, notifySuccess } from '@/lib/notify';
 import { useSavePricingPolicy } from '../api/save-pricing-policy';
-import { CATEGORY_LABELS } from '../utils/labels';
+import { CATEGORY_LABELS } from '@/lib/price-book-labels';
 
 type PolicyFormProps = {
   policy: PricingPolicy;

@@ -2,7 +2,7 @@ import { SimpleGrid, Text } from '@mantine/core';
 import type { ProductionRates } from '@pondwright/shared/pricing';
 import { NumberTextInput } from '@/components/number-text-input';
 import type { PriceBookDraft } from '../hooks/use-price-book-draft';
-import { PRODUCTION_RATE_LABELS } from '../utils/labels';
+import { PRODUCTION_RATE_LABELS } from '@/lib/price-book-labels';
 
 type ProductionRatesPanelProps = { draft: PriceBookDraft; readOnly: boolean };
 

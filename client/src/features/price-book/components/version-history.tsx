@@ -1,20 +1,13 @@
-import { Accordion, Badge, EmptyState, Group, Stack, Table, Text } from '@mantine/core';
+import { Accordion, Badge, EmptyState, Group, Stack, Text } from '@mantine/core';
 import { IconHistory } from '@tabler/icons-react';
 import { useState } from 'react';
 import { ErrorPanel } from '@/components/error-panel';
+import { PriceBookChangesTable } from '@/components/price-book-changes-table';
 import { TableSkeleton } from '@/components/table-skeleton';
 import { formatDate } from '@/lib/format';
 import { usePriceBookVersionChanges } from '../api/get-price-book-version-changes';
 import { usePriceBookVersions } from '../api/get-price-book-versions';
 import type { PriceBookVersionSummary } from '../types';
-import { fieldLabel, SECTION_LABELS } from '../utils/labels';
-
-function showValue(value: unknown): string {
-  if (value === null || value === undefined || value === '') return '—';
-  if (typeof value === 'boolean') return value ? 'Yes' : 'No';
-  if (typeof value === 'object') return JSON.stringify(value);
-  return String(value);
-}
 
 function VersionChanges({ version }: { version: PriceBookVersionSummary }) {
   const changes = usePriceBookVersionChanges(version.id);
@@ -38,38 +31,10 @@ function VersionChanges({ version }: { version: PriceBookVersionSummary }) {
     );
   }
   return (
-    <Table.ScrollContainer minWidth={640}>
-      <Table aria-label={`Changes in version ${version.versionNumber}`} verticalSpacing={6}>
-        <Table.Thead>
-          <Table.Tr>
-            <Table.Th>Section</Table.Th>
-            <Table.Th>Code</Table.Th>
-            <Table.Th>Field</Table.Th>
-            <Table.Th>Before</Table.Th>
-            <Table.Th>After</Table.Th>
-          </Table.Tr>
-        </Table.Thead>
-        <Table.Tbody>
-          {changes.data.map((change, index) => (
-            <Table.Tr key={index}>
-              <Table.Td>{SECTION_LABELS[change.section] ?? change.section}</Table.Td>
-              <Table.Td ff="monospace">{change.code || '—'}</Table.Td>
-              <Table.Td>
-                {change.field === '(item)'
-                  ? change.before === null
-                    ? 'Added'
-                    : 'Removed'
-                  : fieldLabel(change.field)}
-              </Table.Td>
-              <Table.Td c="dimmed" style={{ textDecoration: 'line-through' }}>
-                {showValue(change.before)}
-              </Table.Td>
-              <Table.Td fw={500}>{showValue(change.after)}</Table.Td>
-            </Table.Tr>
-          ))}
-        </Table.Tbody>
-      </Table>
-    </Table.ScrollContainer>
+    <PriceBookChangesTable
+      changes={changes.data}
+      label={`Changes in version ${version.versionNumber}`}
+    />
   );
 }
 

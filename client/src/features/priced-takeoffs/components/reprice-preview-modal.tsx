@@ -2,20 +2,10 @@ import { Badge, Button, Group, Modal, Stack, Table, Text, Title } from '@mantine
 import type { PricedLineChange } from '@pondwright/shared/pricing';
 import { IconRefresh } from '@tabler/icons-react';
 import { ErrorPanel } from '@/components/error-panel';
+import { PriceBookChangesTable } from '@/components/price-book-changes-table';
 import { TableSkeleton } from '@/components/table-skeleton';
 import { formatMoney } from '@/lib/format';
 import { useRepricePreview } from '../api/get-reprice-preview';
-
-const SECTION_LABELS: Record<string, string> = {
-  book: 'Book',
-  material: 'Materials',
-  labor: 'Labor',
-  equipment: 'Equipment',
-  disposal: 'Disposal',
-  rate: 'Production rates',
-  setting: 'Job settings',
-  policy: 'Policy',
-};
 
 const TOTAL_LABELS: Record<string, string> = {
   subtotalCost: 'Cost',
@@ -94,30 +84,7 @@ export function RepricePreviewModal({
                 None.
               </Text>
             ) : (
-              <Table.ScrollContainer minWidth={560}>
-                <Table aria-label="Price-book changes" verticalSpacing={4}>
-                  <Table.Thead>
-                    <Table.Tr>
-                      <Table.Th>Section</Table.Th>
-                      <Table.Th>Code</Table.Th>
-                      <Table.Th>Field</Table.Th>
-                      <Table.Th>Before</Table.Th>
-                      <Table.Th>After</Table.Th>
-                    </Table.Tr>
-                  </Table.Thead>
-                  <Table.Tbody>
-                    {data.bookChanges.map((change, index) => (
-                      <Table.Tr key={index}>
-                        <Table.Td>{SECTION_LABELS[change.section] ?? change.section}</Table.Td>
-                        <Table.Td ff="monospace">{change.code || '—'}</Table.Td>
-                        <Table.Td>{change.field}</Table.Td>
-                        <Table.Td c="dimmed">{change.before ?? '—'}</Table.Td>
-                        <Table.Td>{change.after ?? '—'}</Table.Td>
-                      </Table.Tr>
-                    ))}
-                  </Table.Tbody>
-                </Table>
-              </Table.ScrollContainer>
+              <PriceBookChangesTable changes={data.bookChanges} label="Price-book changes" />
             )}
           </section>
           <section aria-labelledby="line-changes-title">
