@@ -1,6 +1,8 @@
 import { LoginFailure } from '../auth/entities/login-failure.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { Company } from '../companies/entities/company.entity';
+import { Customer } from '../customers/entities/customer.entity';
+import { Site } from '../customers/entities/site.entity';
 import { Invite } from '../invites/entities/invite.entity';
 import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
 import { PricedTakeoff } from '../priced-takeoffs/entities/priced-takeoff.entity';
@@ -14,4 +16,6 @@ export const entities = [
   LoginFailure,
   PriceBookVersion,
   PricedTakeoff,
+  Customer,
+  Site,
 ];

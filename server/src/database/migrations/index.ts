@@ -2,6 +2,7 @@ import { Foundation1796083200000 } from './1796083200000-foundation';
 import { CompanyUnitSystem1796086800000 } from './1796086800000-company-unit-system';
 import { PriceBookVersions1796090400000 } from './1796090400000-price-book-versions';
 import { PricedTakeoffs1796094000000 } from './1796094000000-priced-takeoffs';
+import { CustomersAndSites1796097600000 } from './1796097600000-customers-and-sites';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   CompanyUnitSystem1796086800000,
   PriceBookVersions1796090400000,
   PricedTakeoffs1796094000000,
+  CustomersAndSites1796097600000,
 ];
