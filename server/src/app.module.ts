@@ -9,12 +9,14 @@ import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { AuthModule } from './auth/auth.module';
 import { CompaniesModule } from './companies/companies.module';
+import { CustomersModule } from './customers/customers.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
 import { TenancyModule } from './common/tenancy/tenancy.module';
 import { AppConfig } from './config/app-config';
 import { AppConfigModule } from './config/app-config.module';
 import { dataSourceOptions } from './database/data-source-options';
+import { EstimatesModule } from './estimates/estimates.module';
 import { HealthModule } from './health/health.module';
 import { InvitesModule } from './invites/invites.module';
 import { PriceBookModule } from './price-book/price-book.module';
@@ -60,6 +62,8 @@ import { UsersModule } from './users/users.module';
     TakeoffModule,
     PriceBookModule,
     PricedTakeoffsModule,
+    EstimatesModule,
+    CustomersModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     ServeStaticModule.forRootAsync({
       inject: [AppConfig],

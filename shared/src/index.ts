@@ -2,3 +2,5 @@ export * from './auth/roles';
 export * from './auth/password-policy';
 export * from './auth/auth-schemas';
 export * from './company/company-schemas';
+export * from './customers/customer-schemas';
+export * from './estimates/estimate-schemas';

@@ -3,6 +3,10 @@ import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { Company } from '../companies/entities/company.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { Site } from '../customers/entities/site.entity';
+import { EstimateDraft } from '../estimates/entities/estimate-draft.entity';
+import { EstimateEvent } from '../estimates/entities/estimate-event.entity';
+import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
+import { Estimate } from '../estimates/entities/estimate.entity';
 import { Invite } from '../invites/entities/invite.entity';
 import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
 import { PricedTakeoff } from '../priced-takeoffs/entities/priced-takeoff.entity';
@@ -18,4 +22,8 @@ export const entities = [
   PricedTakeoff,
   Customer,
   Site,
+  Estimate,
+  EstimateDraft,
+  EstimateVersion,
+  EstimateEvent,
 ];

@@ -3,6 +3,7 @@ import { CompanyUnitSystem1796086800000 } from './1796086800000-company-unit-sys
 import { PriceBookVersions1796090400000 } from './1796090400000-price-book-versions';
 import { PricedTakeoffs1796094000000 } from './1796094000000-priced-takeoffs';
 import { CustomersAndSites1796097600000 } from './1796097600000-customers-and-sites';
+import { Estimates1796101200000 } from './1796101200000-estimates';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   PriceBookVersions1796090400000,
   PricedTakeoffs1796094000000,
   CustomersAndSites1796097600000,
+  Estimates1796101200000,
 ];

@@ -1,0 +1,545 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import {
+  createEstimateRequestSchema,
+  ESTIMATE_STATUSES,
+  finaliseEstimateRequestSchema,
+  saveDraftRequestSchema,
+  sendBackEstimateRequestSchema,
+  type ApprovalQueueItem,
+  type EstimateComparison,
+  type EstimateDraftView,
+  type EstimateListPage,
+  type EstimateStatus,
+  type EstimateVersionSummary,
+  type EstimateVersionView,
+  type EstimateView,
+} from '@pondwright/shared';
+import { examplePondInput, toFieldErrors } from '@pondwright/shared/engine';
+import { diffPricedEstimates } from '@pondwright/shared/pricing';
+import { DataSource, type EntityManager } from 'typeorm';
+import type { z } from 'zod';
+import { AppError } from '../common/errors/app-error';
+import { TenantContext } from '../common/tenancy/tenant-context';
+import {
+  isUuid,
+  TenantRepositories,
+  type TenantRepository,
+} from '../common/tenancy/tenant-repository';
+import { Customer } from '../customers/entities/customer.entity';
+import { Site } from '../customers/entities/site.entity';
+import { PriceBookService } from '../price-book/price-book.service';
+import { canonicalJson, versionSha256 } from './content-hash';
+import { EstimateDraft } from './entities/estimate-draft.entity';
+import { EstimateEvent } from './entities/estimate-event.entity';
+import { EstimateVersion } from './entities/estimate-version.entity';
+import { Estimate } from './entities/estimate.entity';
+import { fieldErrors } from './field-errors';
+import { priceEstimateContent, type UncheckedContent } from './price-estimate';
+import { StaleDraftError } from './stale-draft';
+
+export type EstimateListQuery = { status?: string; q?: string; page?: string; pageSize?: string };
+
+const DEFAULT_PAGE_SIZE = 25;
+const MAX_PAGE_SIZE = 100;
+
+/**
+ * Estimates: a working draft recomputed by the server on every save (its numbers are the only ones
+ * stored), finalised into immutable numbered versions, approved by an owner when the margin or discount
+ * is outside the policy. Every write records an audit event in the same transaction.
+ *
+ * Status: a save makes the estimate a `draft` again (editing after finalising starts the next version);
+ * finalising makes it `awaiting_approval` when the version's pricing needs approval, else `approved`
+ * (nothing stands between it and sending); an owner's approval makes it `approved`, a send-back `draft`.
+ */
+@Injectable()
+export class EstimatesService {
+  private readonly estimates: TenantRepository<Estimate>;
+  private readonly customers: TenantRepository<Customer>;
+  private readonly sites: TenantRepository<Site>;
+
+  constructor(
+    repositories: TenantRepositories,
+    private readonly tenant: TenantContext,
+    private readonly priceBook: PriceBookService,
+    @InjectDataSource() private readonly dataSource: DataSource,
+  ) {
+    this.estimates = repositories.for(Estimate);
+    this.customers = repositories.for(Customer);
+    this.sites = repositories.for(Site);
+  }
+
+  async create(body: unknown, actorId: string): Promise<EstimateView> {
+    const request = parse(createEstimateRequestSchema, body);
+    const siteId = request.siteId ?? null;
+    await this.checkCustomerAndSite(request.customerId, siteId);
+    const version = await this.priceBook.currentVersion();
+    const { content, computed } = priceEstimateContent(
+      {
+        title: request.title,
+        customerId: request.customerId,
+        siteId,
+        input: request.input ?? examplePondInput(),
+        discountPct: '0',
+        manualLines: [],
+        scope: '',
+        notes: '',
+      },
+      version.content,
+    );
+    const companyId = this.tenant.companyId;
+    const id = await this.dataSource.transaction(async (manager) => {
+      // A per-company lock makes max + 1 safe: estimate numbers never repeat or skip.
+      await manager.query('SELECT pg_advisory_xact_lock(hashtextextended($1, 0))', [
+        `estimate-number:${companyId}`,
+      ]);
+      const [{ next }] = (await manager.query(
+        'SELECT coalesce(max(number), 0) + 1 AS next FROM estimates WHERE company_id = $1',
+        [companyId],
+      )) as [{ next: number }];
+      const estimate = await this.estimates.save(
+        this.estimates.create({
+          number: Number(next),
+          title: content.title,
+          customerId: content.customerId,
+          siteId,
+          status: 'draft',
+          createdById: actorId,
+        }),
+        manager,
+      );
+      await manager.insert(EstimateDraft, {
+        estimateId: estimate.id,
+        revision: 1,
+        content,
+        computed,
+        priceBookVersionId: version.id,
+        updatedById: actorId,
+        updatedAt: new Date(),
+      });
+      await this.record(manager, estimate.id, actorId, 'created', {
+        number: estimate.number,
+        total: computed.priced.totals.total,
+      });
+      return estimate.id;
+    });
+    return this.get(id);
+  }
+
+  async list(query: EstimateListQuery): Promise<EstimateListPage> {
+    const status = query.status || null;
+    if (status !== null && !(ESTIMATE_STATUSES as readonly string[]).includes(status)) {
+      throw fieldErrors([
+        { field: 'status', message: `Choose one of: ${ESTIMATE_STATUSES.join(', ')}` },
+      ]);
+    }
+    const page = positiveInt(query.page, 1, 'page', Number.MAX_SAFE_INTEGER);
+    const pageSize = positiveInt(query.pageSize, DEFAULT_PAGE_SIZE, 'pageSize', MAX_PAGE_SIZE);
+    const text = query.q?.trim() ? `%${query.q.trim().replace(/[\\%_]/g, '\\$&')}%` : null;
+    const filters = `
+      FROM estimates e
+      JOIN customers c ON c.id = e.customer_id
+      JOIN estimate_drafts d ON d.estimate_id = e.id
+      WHERE e.company_id = $1
+        AND ($2::text IS NULL OR e.status = $2)
+        AND ($3::text IS NULL OR e.title ILIKE $3 OR c.name ILIKE $3 OR e.number::text = $4)`;
+    const parameters = [this.tenant.companyId, status, text, query.q?.trim() ?? ''];
+    const [{ count }] = (await this.dataSource.query(
+      `SELECT count(*)::int AS count ${filters}`,
+      parameters,
+    )) as [{ count: number }];
+    const rows = (await this.dataSource.query(
+      `SELECT e.id, e.number, e.title, e.status, e.updated_at, c.name AS customer_name,
+              d.computed -> 'priced' -> 'totals' ->> 'total' AS total,
+              d.computed -> 'priced' -> 'totals' ->> 'grossMarginPct' AS gross_margin_pct
+       ${filters}
+       ORDER BY e.updated_at DESC, e.number DESC
+       LIMIT $5 OFFSET $6`,
+      [...parameters, pageSize, (page - 1) * pageSize],
+    )) as Array<{
+      id: string;
+      number: number;
+      title: string;
+      status: EstimateStatus;
+      updated_at: Date;
+      customer_name: string;
+      total: string;
+      gross_margin_pct: string | null;
+    }>;
+    return {
+      items: rows.map((row) => ({
+        id: row.id,
+        number: row.number,
+        title: row.title,
+        customerName: row.customer_name,
+        status: row.status,
+        total: row.total,
+        grossMarginPct: row.gross_margin_pct,
+        updatedAt: new Date(row.updated_at).toISOString(),
+      })),
+      total: count,
+      page,
+      pageSize,
+    };
+  }
+
+  async get(id: string): Promise<EstimateView> {
+    const estimate = await this.estimates.getById(id, 'Estimate');
+    const manager = this.dataSource.manager;
+    const [customer, draft, versions, events] = await Promise.all([
+      manager.findOneByOrFail(Customer, { id: estimate.customerId }),
+      this.loadDraft(manager, estimate.id),
+      manager.find(EstimateVersion, {
+        where: { estimateId: estimate.id },
+        relations: { finalisedBy: true },
+        order: { versionNumber: 'ASC' },
+      }),
+      manager.find(EstimateEvent, {
+        where: { estimateId: estimate.id, companyId: estimate.companyId },
+        relations: { actor: true },
+        order: { id: 'ASC' },
+      }),
+    ]);
+    return {
+      id: estimate.id,
+      number: estimate.number,
+      title: estimate.title,
+      customerId: estimate.customerId,
+      customerName: customer.name,
+      siteId: estimate.siteId,
+      status: estimate.status,
+      createdAt: estimate.createdAt.toISOString(),
+      updatedAt: estimate.updatedAt.toISOString(),
+      draft: draftView(draft),
+      versions: versions.map(versionSummary),
+      events: events.map((event) => ({
+        id: event.id,
+        action: event.action,
+        actorName: event.actor?.name ?? '',
+        detail: event.detail,
+        createdAt: event.createdAt.toISOString(),
+      })),
+    };
+  }
+
+  /**
+   * Saves the draft from the revision the client edited: recomputed with the book in effect today and
+   * stored with the next revision. A stale revision answers 409 with the current draft; nothing is written.
+   */
+  async saveDraft(id: string, body: unknown, actorId: string): Promise<EstimateView> {
+    await this.estimates.getById(id, 'Estimate');
+    const { revision, ...unchecked } = parse(saveDraftRequestSchema, body);
+    await this.checkCustomerAndSite(unchecked.customerId, unchecked.siteId);
+    const version = await this.priceBook.currentVersion();
+    const { content, computed } = priceEstimateContent(
+      unchecked as UncheckedContent,
+      version.content,
+    );
+    await this.dataSource.transaction(async (manager) => {
+      const estimate = await this.lockEstimate(manager, id);
+      const draft = await this.loadDraft(manager, id);
+      if (draft.revision !== revision) {
+        throw new StaleDraftError(draftView(draft), changedFields(draft.content, content));
+      }
+      const nextRevision = draft.revision + 1;
+      await manager.update(
+        EstimateDraft,
+        { estimateId: id },
+        {
+          revision: nextRevision,
+          content,
+          computed,
+          priceBookVersionId: version.id,
+          updatedById: actorId,
+          updatedAt: new Date(),
+        },
+      );
+      await manager.update(
+        Estimate,
+        { id },
+        {
+          title: content.title,
+          customerId: content.customerId,
+          siteId: content.siteId,
+          status: 'draft',
+        },
+      );
+      await this.record(manager, id, actorId, 'draft-saved', {
+        revision: nextRevision,
+        total: computed.priced.totals.total,
+        ...(estimate.status !== 'draft' ? { statusBefore: estimate.status } : {}),
+      });
+    });
+    return this.get(id);
+  }
+
+  /**
+   * Freezes the draft at `revision` into the next immutable version with its SHA-256 (see
+   * `versionSha256`). Only a draft can be finalised; a stale revision answers 409 like a save.
+   */
+  async finalise(id: string, body: unknown, actorId: string): Promise<EstimateView> {
+    await this.estimates.getById(id, 'Estimate');
+    const { revision } = parse(finaliseEstimateRequestSchema, body);
+    await this.dataSource.transaction(async (manager) => {
+      const estimate = await this.lockEstimate(manager, id);
+      const draft = await this.loadDraft(manager, id);
+      if (draft.revision !== revision) throw new StaleDraftError(draftView(draft));
+      if (estimate.status !== 'draft') {
+        throw new AppError(
+          'ESTIMATE_NOT_FINALISABLE',
+          'This draft is already finalised. Edit it to start the next version.',
+        );
+      }
+      const [{ next }] = (await manager.query(
+        'SELECT coalesce(max(version_number), 0) + 1 AS next FROM estimate_versions WHERE estimate_id = $1',
+        [id],
+      )) as [{ next: number }];
+      const sha256 = versionSha256(draft.content, draft.computed);
+      const approval = draft.computed.priced.approval;
+      const status: EstimateStatus = approval.needsApproval ? 'awaiting_approval' : 'approved';
+      await manager.insert(EstimateVersion, {
+        estimateId: id,
+        versionNumber: Number(next),
+        content: draft.content,
+        computed: draft.computed,
+        contentSha256: sha256,
+        priceBookVersionId: draft.priceBookVersionId,
+        finalisedById: actorId,
+        finalisedAt: new Date(),
+      });
+      await manager.update(Estimate, { id }, { status });
+      await this.record(manager, id, actorId, 'finalised', {
+        versionNumber: Number(next),
+        revision,
+        sha256,
+        status,
+        reasons: approval.reasons,
+      });
+    });
+    return this.get(id);
+  }
+
+  async getVersion(id: string, versionNumber: string): Promise<EstimateVersionView> {
+    const estimate = await this.estimates.getById(id, 'Estimate');
+    const version = await this.findVersion(estimate.id, versionNumber);
+    return {
+      ...versionSummary(version),
+      content: version.content,
+      computed: version.computed,
+      priceBookVersionId: version.priceBookVersionId,
+    };
+  }
+
+  /** Two versions side by side: lines (quantities, costs, prices) and totals that differ, from a to b. */
+  async compare(
+    id: string,
+    a: string | undefined,
+    b: string | undefined,
+  ): Promise<EstimateComparison> {
+    const estimate = await this.estimates.getById(id, 'Estimate');
+    const [before, after] = await Promise.all([
+      this.findVersion(estimate.id, a, 'a'),
+      this.findVersion(estimate.id, b, 'b'),
+    ]);
+    const changes = diffPricedEstimates(before.computed.priced, after.computed.priced);
+    return { a: versionSummary(before), b: versionSummary(after), ...changes };
+  }
+
+  /** The owner's queue: estimates whose latest version waits for approval, with the reasons. */
+  async approvalQueue(): Promise<ApprovalQueueItem[]> {
+    const rows = (await this.dataSource.query(
+      `SELECT e.id, e.number, e.title, c.name AS customer_name, v.version_number,
+              v.computed -> 'priced' -> 'totals' ->> 'total' AS total,
+              v.computed -> 'priced' -> 'totals' ->> 'grossMarginPct' AS gross_margin_pct,
+              v.computed -> 'priced' -> 'approval' -> 'reasons' AS reasons,
+              u.name AS finalised_by_name, v.finalised_at
+       FROM estimates e
+       JOIN customers c ON c.id = e.customer_id
+       JOIN LATERAL (
+         SELECT * FROM estimate_versions WHERE estimate_id = e.id ORDER BY version_number DESC LIMIT 1
+       ) v ON true
+       JOIN users u ON u.id = v.finalised_by
+       WHERE e.company_id = $1 AND e.status = 'awaiting_approval'
+       ORDER BY v.finalised_at ASC`,
+      [this.tenant.companyId],
+    )) as Array<{
+      id: string;
+      number: number;
+      title: string;
+      customer_name: string;
+      version_number: number;
+      total: string;
+      gross_margin_pct: string | null;
+      reasons: ApprovalQueueItem['reasons'];
+      finalised_by_name: string;
+      finalised_at: Date;
+    }>;
+    return rows.map((row) => ({
+      estimateId: row.id,
+      number: row.number,
+      title: row.title,
+      customerName: row.customer_name,
+      versionNumber: row.version_number,
+      total: row.total,
+      grossMarginPct: row.gross_margin_pct,
+      reasons: row.reasons,
+      finalisedByName: row.finalised_by_name,
+      finalisedAt: new Date(row.finalised_at).toISOString(),
+    }));
+  }
+
+  async approve(id: string, actorId: string): Promise<EstimateView> {
+    await this.decide(id, actorId, 'approved', {});
+    return this.get(id);
+  }
+
+  async sendBack(id: string, body: unknown, actorId: string): Promise<EstimateView> {
+    await this.estimates.getById(id, 'Estimate');
+    const { comment } = parse(sendBackEstimateRequestSchema, body);
+    await this.decide(id, actorId, 'sent-back', { comment });
+    return this.get(id);
+  }
+
+  private async decide(
+    id: string,
+    actorId: string,
+    action: 'approved' | 'sent-back',
+    detail: Record<string, unknown>,
+  ): Promise<void> {
+    await this.estimates.getById(id, 'Estimate');
+    await this.dataSource.transaction(async (manager) => {
+      const estimate = await this.lockEstimate(manager, id);
+      if (estimate.status !== 'awaiting_approval') {
+        throw new AppError(
+          'ESTIMATE_NOT_AWAITING_APPROVAL',
+          'This estimate is not waiting for approval.',
+        );
+      }
+      const [{ latest }] = (await manager.query(
+        'SELECT max(version_number) AS latest FROM estimate_versions WHERE estimate_id = $1',
+        [id],
+      )) as [{ latest: number }];
+      await manager.update(
+        Estimate,
+        { id },
+        { status: action === 'approved' ? 'approved' : 'draft' },
+      );
+      await this.record(manager, id, actorId, action, { versionNumber: latest, ...detail });
+    });
+  }
+
+  /** The customer and site must be this company's, and the site the customer's: else 404. */
+  private async checkCustomerAndSite(customerId: string, siteId: string | null): Promise<void> {
+    await this.customers.getById(customerId, 'Customer');
+    if (siteId !== null) {
+      const site = await this.sites.findOneBy({ id: siteId, customerId });
+      if (!site) throw new AppError('NOT_FOUND', 'Site not found for this customer');
+    }
+  }
+
+  /** Locks the estimate row for the transaction (writes to one estimate run one at a time). */
+  private async lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
+    const estimate = isUuid(id)
+      ? await manager.findOne(Estimate, {
+          where: { id, companyId: this.tenant.companyId },
+          lock: { mode: 'pessimistic_write' },
+        })
+      : null;
+    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
+    return estimate;
+  }
+
+  private async loadDraft(manager: EntityManager, estimateId: string): Promise<EstimateDraft> {
+    return manager.findOneOrFail(EstimateDraft, {
+      where: { estimateId },
+      relations: { updatedBy: true },
+    });
+  }
+
+  private async findVersion(
+    estimateId: string,
+    versionNumber: string | undefined,
+    field = 'versionNumber',
+  ): Promise<EstimateVersion> {
+    const number = Number(versionNumber);
+    if (!Number.isInteger(number) || number < 1 || number > 2_147_483_647) {
+      throw fieldErrors([{ field, message: 'Give a version number such as 1' }]);
+    }
+    const version = await this.dataSource.manager.findOne(EstimateVersion, {
+      where: { estimateId, versionNumber: number },
+      relations: { finalisedBy: true },
+    });
+    if (!version) {
+      throw new AppError('ESTIMATE_VERSION_NOT_FOUND', `This estimate has no version ${number}`);
+    }
+    return version;
+  }
+
+  private async record(
+    manager: EntityManager,
+    estimateId: string,
+    actorId: string,
+    action: string,
+    detail: Record<string, unknown>,
+  ): Promise<void> {
+    await manager.save(
+      manager.create(EstimateEvent, {
+        companyId: this.tenant.companyId,
+        estimateId,
+        actorId,
+        action,
+        detail,
+      }),
+    );
+  }
+}
+
+function parse<S extends z.ZodType>(schema: S, body: unknown): z.infer<S> {
+  const result = schema.safeParse(body);
+  if (!result.success) throw fieldErrors(toFieldErrors(result.error.issues));
+  return result.data;
+}
+
+function positiveInt(value: string | undefined, fallback: number, field: string, max: number) {
+  if (value === undefined || value === '') return fallback;
+  const number = Number(value);
+  if (!Number.isInteger(number) || number < 1 || number > max) {
+    throw fieldErrors([{ field, message: `Give a whole number from 1 to ${max}` }]);
+  }
+  return number;
+}
+
+/** The content fields where the stored draft differs from the copy the client sent. */
+function changedFields(current: object, sent: object): Array<{ field: string; message: string }> {
+  const keys = new Set([...Object.keys(current), ...Object.keys(sent)]);
+  return [...keys]
+    .filter(
+      (key) =>
+        canonicalJson((current as Record<string, unknown>)[key]) !==
+        canonicalJson((sent as Record<string, unknown>)[key]),
+    )
+    .sort()
+    .map((field) => ({ field, message: 'Differs from the saved draft' }));
+}
+
+function draftView(draft: EstimateDraft): EstimateDraftView {
+  return {
+    revision: draft.revision,
+    content: draft.content,
+    computed: draft.computed,
+    priceBookVersionId: draft.priceBookVersionId,
+    updatedByName: draft.updatedBy?.name ?? '',
+    updatedAt: draft.updatedAt.toISOString(),
+  };
+}
+
+function versionSummary(version: EstimateVersion): EstimateVersionSummary {
+  return {
+    versionNumber: version.versionNumber,
+    contentSha256: version.contentSha256,
+    total: version.computed.priced.totals.total,
+    grossMarginPct: version.computed.priced.totals.grossMarginPct,
+    finalisedByName: version.finalisedBy?.name ?? '',
+    finalisedAt: version.finalisedAt.toISOString(),
+  };
+}
