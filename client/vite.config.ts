@@ -12,7 +12,14 @@ export const aliases = [
     find: /^@pondwright\/shared\/engine\/polygon-inset$/,
     replacement: fromHere('../shared/src/engine/polygon-inset.ts'),
   },
-  { find: /^@pondwright\/shared\/pricing$/, replacement: fromHere('../shared/src/pricing/index.ts') },
+  {
+    find: /^@pondwright\/shared\/drawings$/,
+    replacement: fromHere('../shared/src/drawings/index.ts'),
+  },
+  {
+    find: /^@pondwright\/shared\/pricing$/,
+    replacement: fromHere('../shared/src/pricing/index.ts'),
+  },
   { find: /^@pondwright\/shared$/, replacement: fromHere('../shared/src/index.ts') },
 ];
 

@@ -1,5 +1,6 @@
 import type { Role } from '@pondwright/shared';
 import {
+  IconAddressBook,
   IconBook2,
   IconBuildingStore,
   IconHome2,
@@ -13,6 +14,7 @@ import { canAccess, type Area } from '@/lib/authorization';
 
 const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
   { label: 'Home', to: paths.home.getHref(), icon: IconHome2, area: 'home' },
+  { label: 'Customers', to: paths.customers.getHref(), icon: IconAddressBook, area: 'customers' },
   { label: 'Takeoff', to: paths.takeoff.getHref(), icon: IconRulerMeasure, area: 'takeoff' },
   {
     label: 'Priced takeoffs',

@@ -61,6 +61,18 @@ export function createAppRoutes(): RouteObject[] {
               }),
             },
             {
+              path: paths.customers.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/customers')).CustomersRoute,
+              }),
+            },
+            {
+              path: paths.customer.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/customer')).CustomerRoute,
+              }),
+            },
+            {
               path: paths.pricedTakeoffs.path,
               lazy: async () => ({
                 Component: (await import('./routes/app/priced-takeoffs')).PricedTakeoffsRoute,

@@ -7,6 +7,11 @@ export const paths = {
     path: '/price-book/:tab?',
     getHref: (tab?: string) => (tab ? `/price-book/${tab}` : '/price-book'),
   },
+  customers: { path: '/customers', getHref: () => '/customers' },
+  customer: {
+    path: '/customers/:id',
+    getHref: (id: string) => `/customers/${encodeURIComponent(id)}`,
+  },
   pricedTakeoffs: { path: '/priced-takeoffs', getHref: () => '/priced-takeoffs' },
   pricedTakeoff: {
     path: '/priced-takeoffs/:id',

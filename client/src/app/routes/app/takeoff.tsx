@@ -1,5 +1,6 @@
 import { Alert } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
+import { TakeoffDrawings } from '@/components/drawings/takeoff-drawings';
 import { PageHeader } from '@/components/page-header';
 import { PageLoader } from '@/components/page-loader';
 import { RequireRole } from '@/features/auth/components/require-role';
@@ -21,6 +22,7 @@ function TakeoffPage() {
       <TakeoffWorkspace
         unitSystem={company.data?.unitSystem ?? 'us'}
         renderActions={(input) => <SavePricedTakeoffButton input={input} />}
+        renderDrawings={(input, takeoff) => <TakeoffDrawings input={input} takeoff={takeoff} />}
       />
     </>
   );

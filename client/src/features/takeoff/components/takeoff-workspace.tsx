@@ -11,7 +11,7 @@ import {
   useMantineTheme,
   useMatches,
 } from '@mantine/core';
-import type { TakeoffInput, UnitSystem } from '@pondwright/shared/engine';
+import type { Takeoff, TakeoffInput, UnitSystem } from '@pondwright/shared/engine';
 import { useCallback, useMemo, useState, type ReactNode } from 'react';
 import { anyOutlineBendsInward, usePolygonInset } from '../hooks/use-polygon-inset';
 import { useTakeoffPreview } from '../hooks/use-takeoff-preview';
@@ -51,6 +51,8 @@ type TakeoffWorkspaceProps = {
   unitSystem?: UnitSystem;
   /** Actions beside the result that need the takeoff as it stands, e.g. saving it with a price. */
   renderActions?: (input: unknown) => ReactNode;
+  /** Drawn above the figures, e.g. the plan and cross-section of the measurements as they stand. */
+  renderDrawings?: (input: unknown, takeoff: Takeoff) => ReactNode;
 };
 
 /** The takeoff screen: measurements on the left, the engine's figures on the right as they are typed. */
@@ -58,6 +60,7 @@ export function TakeoffWorkspace({
   initialValues = DEFAULT_TAKEOFF_INPUT,
   unitSystem = initialValues.unitSystem,
   renderActions,
+  renderDrawings,
 }: TakeoffWorkspaceProps) {
   const theme = useMantineTheme();
   const form = useTakeoffForm({
@@ -155,6 +158,9 @@ export function TakeoffWorkspace({
                     style={{ opacity: preview.stale ? 0.55 : 1, transition: 'opacity 150ms' }}
                     aria-busy={preview.updating}
                   >
+                    {renderDrawings && (
+                      <Box mb="lg">{renderDrawings(engineInput, preview.takeoff)}</Box>
+                    )}
                     <TakeoffResults takeoff={preview.takeoff} onShowField={showField} />
                   </Box>
                 )}
