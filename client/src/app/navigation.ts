@@ -3,6 +3,7 @@ import {
   IconAddressBook,
   IconBook2,
   IconBuildingStore,
+  IconFileInvoice,
   IconHome2,
   IconReceipt2,
   IconRulerMeasure,
@@ -10,6 +11,7 @@ import {
 } from '@tabler/icons-react';
 import type { AppNavItem } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
+import { ApprovalsNavIcon } from '@/features/approvals/components/approvals-nav-icon';
 import { canAccess, type Area } from '@/lib/authorization';
 
 const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
@@ -22,9 +24,11 @@ const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
     icon: IconReceipt2,
     area: 'pricedTakeoffs',
   },
+  { label: 'Estimates', to: paths.estimates.getHref(), icon: IconFileInvoice, area: 'estimates' },
   { label: 'Price book', to: paths.priceBook.getHref(), icon: IconBook2, area: 'priceBook' },
   // Estimates and Jobs are added here, each with its own area in lib/authorization.ts,
   // when their pages exist; links to missing pages are not shown.
+  { label: 'Approvals', to: paths.approvals.getHref(), icon: ApprovalsNavIcon, area: 'approvals' },
   { label: 'Team', to: paths.team.getHref(), icon: IconUsersGroup, area: 'team' },
   { label: 'Company', to: paths.company.getHref(), icon: IconBuildingStore, area: 'company' },
 ];

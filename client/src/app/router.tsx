@@ -84,6 +84,24 @@ export function createAppRoutes(): RouteObject[] {
                 Component: (await import('./routes/app/priced-takeoff')).PricedTakeoffRoute,
               }),
             },
+            {
+              path: paths.estimates.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/estimates')).EstimatesRoute,
+              }),
+            },
+            {
+              path: paths.estimate.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/estimate')).EstimateRoute,
+              }),
+            },
+            {
+              path: paths.approvals.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/approvals')).ApprovalsRoute,
+              }),
+            },
           ],
         },
         { path: '*', Component: NotFoundRoute },

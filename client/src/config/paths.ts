@@ -17,6 +17,12 @@ export const paths = {
     path: '/priced-takeoffs/:id',
     getHref: (id: string) => `/priced-takeoffs/${encodeURIComponent(id)}`,
   },
+  approvals: { path: '/approvals', getHref: () => '/approvals' },
+  estimates: { path: '/estimates', getHref: () => '/estimates' },
+  estimate: {
+    path: '/estimates/:id',
+    getHref: (id: string) => `/estimates/${encodeURIComponent(id)}`,
+  },
   signIn: {
     path: '/sign-in',
     getHref: (next?: string | null) =>

@@ -10,9 +10,13 @@ export const AREA_ROLES = {
   /** Changing prices, the policy and the book's CSV; estimators read the book. */
   priceBookEdit: ['owner'],
   pricedTakeoffs: ['owner', 'estimator'],
+  estimates: ['owner', 'estimator'],
   /** Crew leads read customers and sites for the job packet's access notes. */
   customers: ROLES,
   customersEdit: ['owner', 'estimator'],
+  /** The approval queue and the pipeline dashboard on Home. */
+  approvals: ['owner'],
+  dashboard: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Area = keyof typeof AREA_ROLES;
