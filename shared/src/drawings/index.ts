@@ -23,7 +23,8 @@ export {
   type FlowHeadPoint,
 } from './pump-chart';
 export { outlinePoints, OVAL_DRAWING_SEGMENTS } from './outline-points';
-export { insetOutline, insetConvexPoints, centroidOf } from './inset-outline';
+export { insetOutline, centroidOf } from './inset-outline';
+export { insetConvexPoints } from '../engine/geometry/convex-inset';
 export { offsetPolylineRight } from './polyline-offset';
 export { lengthLabel } from './length-label';
 export { boundsOf, type BoundsFt, type DimensionLine, type PointFt } from './types';

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { insetConvexPolygon } from '../engine/geometry/convex-inset';
 import { signedAreaSqFt } from '../engine/geometry/polygon';
-import { centroidOf, insetConvexPoints, insetOutline } from './inset-outline';
+import { insetConvexPoints } from '../engine/geometry/convex-inset';
+import { centroidOf, insetOutline } from './inset-outline';
 import { outlinePoints } from './outline-points';
 
 const rectangle = outlinePoints({ shape: 'rectangle', lengthFt: 15, widthFt: 10 });

@@ -1,41 +1,6 @@
-import { isConvex } from '../engine/geometry/convex-inset';
+import { insetConvexPoints, isConvex } from '../engine/geometry/convex-inset';
 import { signedAreaSqFt } from '../engine/geometry/polygon';
 import type { PointFt } from './types';
-
-/**
- * The points of a convex polygon inset by `insetFt` ≥ 0: the intersection of its edges' half-planes
- * moved inward, clipped edge by edge. This is the engine's exact convex inset (`insetConvexPolygon`,
- * which reports only area and perimeter) returning the polygon itself. ft; not rounded. Empty when the
- * inset passes the polygon's inradius.
- */
-export function insetConvexPoints(points: readonly PointFt[], insetFt: number): PointFt[] {
-  const ring = signedAreaSqFt(points) < 0 ? [...points].reverse() : [...points];
-  let clipped: PointFt[] = ring;
-  for (let i = 0; i < ring.length && clipped.length > 0; i++) {
-    const a = ring[i]!;
-    const b = ring[(i + 1) % ring.length]!;
-    const length = Math.hypot(b.xFt - a.xFt, b.yFt - a.yFt);
-    if (length === 0) continue;
-    const nx = -(b.yFt - a.yFt) / length;
-    const ny = (b.xFt - a.xFt) / length;
-    const limit = nx * a.xFt + ny * a.yFt + insetFt;
-    const side = (p: PointFt) => nx * p.xFt + ny * p.yFt - limit;
-    const next: PointFt[] = [];
-    for (let j = 0; j < clipped.length; j++) {
-      const p = clipped[j]!;
-      const q = clipped[(j + 1) % clipped.length]!;
-      const sp = side(p);
-      const sq = side(q);
-      if (sp >= 0) next.push(p);
-      if (sp >= 0 !== sq >= 0) {
-        const t = sp / (sp - sq);
-        next.push({ xFt: p.xFt + t * (q.xFt - p.xFt), yFt: p.yFt + t * (q.yFt - p.yFt) });
-      }
-    }
-    clipped = next;
-  }
-  return clipped.length >= 3 && Math.abs(signedAreaSqFt(clipped)) > 1e-9 ? clipped : [];
-}
 
 /** The area centroid of a simple polygon, ft. */
 export function centroidOf(points: readonly PointFt[]): PointFt {

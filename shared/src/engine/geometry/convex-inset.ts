@@ -21,16 +21,13 @@ export function isConvex(points: readonly PointFt[]): boolean {
 }
 
 /**
- * Insets (erodes) a convex polygon by `insetFt` ≥ 0: the points at least `insetFt` inside every edge.
- * For a convex polygon this erosion by a disk is exactly the intersection of its edges' half-planes,
- * each moved inward by `insetFt` (Minkowski difference of convex sets), so no rounding of corners is
- * involved and the result is exact. Clipped edge by edge (Sutherland–Hodgman). Area in ft², perimeter
- * in ft; not rounded. An inset past the polygon's inradius leaves nothing (0, 0).
+ * The points of a convex polygon inset (eroded) by `insetFt` ≥ 0: the points at least `insetFt` inside
+ * every edge. For a convex polygon this erosion by a disk is exactly the intersection of its edges'
+ * half-planes, each moved inward by `insetFt` (Minkowski difference of convex sets), so no rounding of
+ * corners is involved and the result is exact. Clipped edge by edge (Sutherland–Hodgman), returned
+ * counter-clockwise in ft, not rounded; empty once the inset passes the polygon's inradius.
  */
-export function insetConvexPolygon(
-  points: readonly PointFt[],
-  insetFt: number,
-): { areaSqFt: number; perimeterFt: number; pieces: number } {
+export function insetConvexPoints(points: readonly PointFt[], insetFt: number): PointFt[] {
   // Work counter-clockwise so "inside" is to the left of every edge.
   const ring = signedAreaSqFt(points) < 0 ? [...points].reverse() : [...points];
   let clipped: PointFt[] = ring;
@@ -58,7 +55,18 @@ export function insetConvexPolygon(
     }
     clipped = next;
   }
-  const areaSqFt = clipped.length >= 3 ? Math.abs(signedAreaSqFt(clipped)) : 0;
-  if (areaSqFt <= 1e-12) return { areaSqFt: 0, perimeterFt: 0, pieces: 0 };
-  return { areaSqFt, perimeterFt: perimeterFt(clipped), pieces: 1 };
+  return clipped.length >= 3 && Math.abs(signedAreaSqFt(clipped)) > 1e-12 ? clipped : [];
+}
+
+/**
+ * Area (ft²) and perimeter (ft) of a convex polygon inset by `insetFt` ≥ 0 (see `insetConvexPoints`);
+ * not rounded. An inset past the polygon's inradius leaves nothing (0, 0).
+ */
+export function insetConvexPolygon(
+  points: readonly PointFt[],
+  insetFt: number,
+): { areaSqFt: number; perimeterFt: number; pieces: number } {
+  const inset = insetConvexPoints(points, insetFt);
+  if (inset.length === 0) return { areaSqFt: 0, perimeterFt: 0, pieces: 0 };
+  return { areaSqFt: Math.abs(signedAreaSqFt(inset)), perimeterFt: perimeterFt(inset), pieces: 1 };
 }
