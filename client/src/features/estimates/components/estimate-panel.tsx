@@ -2,7 +2,7 @@ import { Alert, Grid, List, Paper, Stack, Textarea, TextInput, Title } from '@ma
 import type { EstimateView } from '@pondwright/shared';
 import type { EstimateEditor } from '../hooks/use-estimate-editor';
 import { ManualLinesEditor } from './manual-lines-editor';
-import { PricedLines } from './priced-lines';
+import { PricedEstimateView } from '@/components/priced-estimate-view';
 
 type EstimatePanelProps = { estimate: EstimateView; editor: EstimateEditor };
 
@@ -31,7 +31,7 @@ export function EstimatePanel({ estimate, editor }: EstimatePanelProps) {
         <Title order={2} fz="h4" id="estimate-priced-title" mb="sm">
           Priced lines (revision {estimate.draft.revision})
         </Title>
-        <PricedLines
+        <PricedEstimateView
           priced={estimate.draft.computed.priced}
           cautions={estimate.draft.computed.takeoff.cautions}
         />

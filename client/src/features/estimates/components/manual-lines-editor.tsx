@@ -2,7 +2,7 @@ import { ActionIcon, Button, Checkbox, Select, Stack, Table, Text, TextInput } f
 import type { ManualLine } from '@pondwright/shared';
 import { IconPlus, IconTrash } from '@tabler/icons-react';
 import type { FieldError } from '@/lib/api-error';
-import { CATEGORY_LABELS } from './priced-lines';
+import { CATEGORY_LABELS } from '@/lib/price-book-labels';
 
 const CATEGORY_OPTIONS = Object.entries(CATEGORY_LABELS).map(([value, label]) => ({
   value,

@@ -8,7 +8,7 @@ import { formatDate } from '@/lib/format';
 import { notifyApiError, notifySuccess } from '@/lib/notify';
 import { usePricedTakeoff } from '../api/get-priced-takeoff';
 import { useRepricePricedTakeoff } from '../api/reprice-priced-takeoff';
-import { PricedEstimateView } from './priced-estimate-view';
+import { PricedEstimateView } from '@/components/priced-estimate-view';
 import { RepricePreviewModal } from './reprice-preview-modal';
 
 /** One priced takeoff: its lines and totals, the book version behind them, and re-pricing. */

@@ -1,16 +1,9 @@
 import { Alert, Badge, Group, List, Paper, Stack, Table, Text, Title } from '@mantine/core';
+import type { Caution } from '@pondwright/shared/engine';
 import type { PricedEstimate, PriceCategory } from '@pondwright/shared/pricing';
 import { IconAlertTriangle } from '@tabler/icons-react';
 import { formatMoney } from '@/lib/format';
-
-// In the order the pricing module groups lines; a type-only import keeps its code out of this chunk.
-const CATEGORY_LABELS: Record<PriceCategory, string> = {
-  materials: 'Materials',
-  labor: 'Labor',
-  equipment: 'Equipment',
-  disposal: 'Disposal',
-  other: 'Other',
-};
+import { CATEGORY_LABELS } from '@/lib/price-book-labels';
 
 function TotalRow({ label, value, strong }: { label: string; value: string; strong?: boolean }) {
   return (
@@ -23,8 +16,17 @@ function TotalRow({ label, value, strong }: { label: string; value: string; stro
   );
 }
 
-/** A priced takeoff as a customer's estimate would group it: lines by category, then the totals. */
-export function PricedEstimateView({ priced }: { priced: PricedEstimate }) {
+type PricedEstimateViewProps = {
+  priced: PricedEstimate;
+  /** The takeoff's warnings and safety cautions, shown above the lines when given. */
+  cautions?: readonly Caution[];
+};
+
+/**
+ * A priced estimate as a customer's quote would group it: what the book could not price, approval flags,
+ * cautions, lines by category (manual lines marked), then the totals.
+ */
+export function PricedEstimateView({ priced, cautions = [] }: PricedEstimateViewProps) {
   const money = (amount: string) => formatMoney(amount, priced.currency);
   const totals = priced.totals;
   const groups = (Object.keys(CATEGORY_LABELS) as PriceCategory[])
@@ -47,6 +49,17 @@ export function PricedEstimateView({ priced }: { priced: PricedEstimate }) {
           <List size="sm">
             {priced.missing.map((item, index) => (
               <List.Item key={index}>{item.message}</List.Item>
+            ))}
+          </List>
+        </Alert>
+      )}
+      {cautions.length > 0 && (
+        <Alert color="yellow" variant="light" title="Cautions from the takeoff">
+          <List size="sm">
+            {cautions.map((caution) => (
+              <List.Item key={`${caution.code}-${caution.field ?? ''}`}>
+                {caution.message}
+              </List.Item>
             ))}
           </List>
         </Alert>
@@ -82,6 +95,11 @@ export function PricedEstimateView({ priced }: { priced: PricedEstimate }) {
                   <Table.Tr key={line.id}>
                     <Table.Td>
                       {line.description}
+                      {line.source.startsWith('manual') && (
+                        <Badge size="xs" variant="light" color="clay" ml={6}>
+                          manual
+                        </Badge>
+                      )}
                       {line.taxable && (
                         <Badge size="xs" variant="light" color="stone" ml={6}>
                           taxable
