@@ -4,7 +4,6 @@ import {
   Group,
   NativeSelect,
   Pagination,
-  Skeleton,
   Table,
   Text,
   TextInput,
@@ -22,6 +21,7 @@ import {
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { ErrorPanel } from '@/components/error-panel';
+import { TableStatusRows } from '@/components/table-status-rows';
 import { formatDate } from '@/lib/format';
 import { useCustomers } from '../api/get-customers';
 
@@ -132,25 +132,16 @@ export function CustomersTable({ customerHref, onCreate }: CustomersTableProps) 
               </Table.Tr>
             </Table.Thead>
             <Table.Tbody>
-              {!data &&
-                Array.from({ length: 5 }, (_, index) => (
-                  <Table.Tr key={index}>
-                    <Table.Td colSpan={6}>
-                      <Skeleton height={18} />
-                    </Table.Td>
-                  </Table.Tr>
-                ))}
-              {data?.items.length === 0 && (
-                <Table.Tr>
-                  <Table.Td colSpan={6}>
-                    <Text c="dimmed" size="sm" ta="center" py="md">
-                      {searching
-                        ? `No customers match “${q.trim()}”.`
-                        : 'No customers yet. Add the first one to start quoting.'}
-                    </Text>
-                  </Table.Td>
-                </Table.Tr>
-              )}
+              <TableStatusRows
+                columns={6}
+                loading={!data}
+                empty={data?.items.length === 0}
+                emptyMessage={
+                  searching
+                    ? `No customers match “${q.trim()}”.`
+                    : 'No customers yet. Add the first one to start quoting.'
+                }
+              />
               {data?.items.map((customer) => (
                 <Table.Tr key={customer.id}>
                   <Table.Td>

@@ -1,20 +1,11 @@
-import {
-  Anchor,
-  Button,
-  Group,
-  Pagination,
-  Select,
-  Skeleton,
-  Table,
-  Text,
-  TextInput,
-} from '@mantine/core';
+import { Anchor, Button, Group, Pagination, Select, Table, Text, TextInput } from '@mantine/core';
 import { useDebouncedValue } from '@mantine/hooks';
 import { ESTIMATE_STATUSES, type EstimateStatus } from '@pondwright/shared';
 import { IconPlus, IconSearch } from '@tabler/icons-react';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { ErrorPanel } from '@/components/error-panel';
+import { TableStatusRows } from '@/components/table-status-rows';
 import { formatDate, formatMoney, formatPercent } from '@/lib/format';
 import { useEstimates } from '../api/get-estimates';
 import { ESTIMATE_STATUS_LABELS, EstimateStatusBadge } from './estimate-status-badge';
@@ -97,25 +88,16 @@ export function EstimatesTable({ estimateHref, onCreate }: EstimatesTableProps) 
               </Table.Tr>
             </Table.Thead>
             <Table.Tbody>
-              {!data &&
-                Array.from({ length: 5 }, (_, index) => (
-                  <Table.Tr key={index}>
-                    <Table.Td colSpan={7}>
-                      <Skeleton height={18} />
-                    </Table.Td>
-                  </Table.Tr>
-                ))}
-              {data?.items.length === 0 && (
-                <Table.Tr>
-                  <Table.Td colSpan={7}>
-                    <Text c="dimmed" size="sm" ta="center" py="md">
-                      {filtered
-                        ? 'No estimates match the search or status.'
-                        : 'No estimates yet. Start one for a customer.'}
-                    </Text>
-                  </Table.Td>
-                </Table.Tr>
-              )}
+              <TableStatusRows
+                columns={7}
+                loading={!data}
+                empty={data?.items.length === 0}
+                emptyMessage={
+                  filtered
+                    ? 'No estimates match the search or status.'
+                    : 'No estimates yet. Start one for a customer.'
+                }
+              />
               {data?.items.map((estimate) => (
                 <Table.Tr key={estimate.id}>
                   <Table.Td ff="monospace">#{estimate.number}</Table.Td>
