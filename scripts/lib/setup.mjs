@@ -3,6 +3,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { connect } from 'node:net';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -133,9 +134,120 @@ export async function startServer({
   throw new Error(`the server did not answer on ${url} within 60 s`);
 }
 
+/**
+ * The ports of the local fakes (fake SMTP, its mailbox API, fake payments): the given defaults, each
+ * overridable from the environment so two checkouts can run side by side.
+ */
+export function fakePorts({ smtpPort, mailboxPort, paymentsPort }) {
+  return {
+    smtpPort: Number(process.env.FAKE_SMTP_PORT ?? smtpPort),
+    mailboxPort: Number(process.env.FAKE_MAILBOX_HTTP_PORT ?? mailboxPort),
+    paymentsPort: Number(process.env.FAKE_PAYMENTS_PORT ?? paymentsPort),
+  };
+}
+
+/** Where the fake provider posts its webhooks: the app on this machine. */
+export function appWebhookUrl(appPort, appHost = '127.0.0.1') {
+  const listensEverywhere = appHost === '0.0.0.0' || appHost === '::';
+  const host = listensEverywhere ? '127.0.0.1' : appHost.includes(':') ? `[${appHost}]` : appHost;
+  return `http://${host}:${appPort}/api/payments/webhook`;
+}
+
+/**
+ * Starts the fake SMTP server and the fake payment provider (server/dist/dev-fakes/main.js, so the server
+ * must be built) and resolves once both answer. `serverEnv` points the app server at them.
+ */
+export async function startFakes({
+  smtpPort,
+  mailboxPort,
+  paymentsPort,
+  webhookUrl,
+  quiet = false,
+}) {
+  const child = spawn(process.execPath, ['server/dist/dev-fakes/main.js'], {
+    cwd: repoRoot,
+    env: {
+      ...process.env,
+      FAKE_SMTP_PORT: String(smtpPort),
+      FAKE_MAILBOX_HTTP_PORT: String(mailboxPort),
+      FAKE_PAYMENTS_PORT: String(paymentsPort),
+      FAKE_PAYMENTS_WEBHOOK_URL: webhookUrl,
+    },
+    // The IPC channel is only a lifeline: the fakes exit when it closes, even if this script is killed.
+    stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
+  });
+  child.channel?.unref();
+  // Announced once both listen; waiting for it (not just an open port) avoids mistaking another
+  // checkout's fakes on the same ports for ours.
+  const announced = new Promise((resolveAnnounced, rejectAnnounced) => {
+    let output = '';
+    child.stdout.on('data', (chunk) => {
+      if (!quiet) process.stdout.write(chunk);
+      if (output === null) return;
+      output += chunk;
+      if (output.includes('[fake-payments]')) {
+        output = null;
+        resolveAnnounced();
+      }
+    });
+    child.once('exit', (code) =>
+      rejectAnnounced(new Error(`the local fakes exited (code ${code})`)),
+    );
+  });
+  const stop = () => stopProcess(child);
+  try {
+    await withTimeout(announced, 15_000, 'the local fakes did not start within 15 s');
+    await Promise.all([smtpPort, mailboxPort, paymentsPort].map((port) => waitForPort(port)));
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+  const mailboxUrl = `http://127.0.0.1:${mailboxPort}`;
+  const paymentsUrl = `http://127.0.0.1:${paymentsPort}`;
+  return {
+    child,
+    stop,
+    mailboxUrl,
+    paymentsUrl,
+    serverEnv: {
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtpPort),
+      MAILBOX_URL: mailboxUrl,
+      STRIPE_API_URL: paymentsUrl,
+    },
+  };
+}
+
+/** Resolves once 127.0.0.1:port accepts a TCP connection. */
+async function waitForPort(port, timeoutMs = 10_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const open = await new Promise((resolveProbe) => {
+      const socket = connect(port, '127.0.0.1');
+      socket.once('connect', () => {
+        socket.destroy();
+        resolveProbe(true);
+      });
+      socket.once('error', () => resolveProbe(false));
+    });
+    if (open) return;
+    await new Promise((resolveWait) => setTimeout(resolveWait, 100));
+  }
+  throw new Error(`nothing listens on 127.0.0.1:${port} after ${timeoutMs / 1000} s`);
+}
+
+function withTimeout(promise, ms, message) {
+  let timer;
+  const timeout = new Promise((_, rejectTimeout) => {
+    timer = setTimeout(() => rejectTimeout(new Error(message)), ms);
+  });
+  return Promise.race([promise, timeout]).finally(() => clearTimeout(timer));
+}
+
 /** Stops a child process and waits for it to exit. */
 export function stopProcess(child, signal = 'SIGTERM') {
-  if (!child || child.exitCode !== null) return Promise.resolve();
+  // A child ended by a signal keeps exitCode null; signalCode tells it is gone too.
+  if (!child || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
   return new Promise((resolveStop) => {
     const timer = setTimeout(() => child.kill('SIGKILL'), 10_000);
     child.once('exit', () => {

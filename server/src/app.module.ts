@@ -6,7 +6,6 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
 import { randomUUID } from 'node:crypto';
 import { existsSync } from 'node:fs';
-import { resolve } from 'node:path';
 import { AuthModule } from './auth/auth.module';
 import { CompaniesModule } from './companies/companies.module';
 import { CustomersModule } from './customers/customers.module';
@@ -19,8 +18,16 @@ import { dataSourceOptions } from './database/data-source-options';
 import { EstimatesModule } from './estimates/estimates.module';
 import { HealthModule } from './health/health.module';
 import { InvitesModule } from './invites/invites.module';
+import { MailModule } from './mail/mail.module';
+import { PaymentsModule } from './payments/payments.module';
+import { QuotesModule } from './quotes/quotes.module';
 import { PriceBookModule } from './price-book/price-book.module';
 import { PricedTakeoffsModule } from './priced-takeoffs/priced-takeoffs.module';
+import {
+  clientDistDir,
+  QUOTE_PAGE_ROUTE,
+  QuotePageHostModule,
+} from './quote-page-host/quote-page-host.module';
 import { TakeoffModule } from './takeoff/takeoff.module';
 import { UsersModule } from './users/users.module';
 
@@ -40,6 +47,13 @@ import { UsersModule } from './users/users.module';
           // Tokens, cookies and passwords never reach the log.
           redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
           autoLogging: { ignore: (request) => request.url === '/api/health' },
+          // A quote link's token is as good as a password for that quote: never logged.
+          serializers: {
+            req: (request: { url?: string }) => ({
+              ...request,
+              url: request.url?.replace(/\/(quotes|q)\/[^/?#]+/, '/$1/[token]'),
+            }),
+          },
         },
       }),
     }),
@@ -64,14 +78,21 @@ import { UsersModule } from './users/users.module';
     PricedTakeoffsModule,
     EstimatesModule,
     CustomersModule,
+    MailModule,
+    PaymentsModule,
+    QuotesModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
+    // `/q/<token>` is the homeowner's quote page, quote.html, served by QuotePageHostModule.
     ServeStaticModule.forRootAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => {
-        const rootPath = config.clientDistDir ?? resolve(__dirname, '../../client/dist');
-        return existsSync(rootPath) ? [{ rootPath, exclude: ['/api/{*rest}'] }] : [];
+        const rootPath = clientDistDir(config);
+        return existsSync(rootPath)
+          ? [{ rootPath, exclude: ['/api/{*rest}', QUOTE_PAGE_ROUTE] }]
+          : [];
       },
     }),
+    QuotePageHostModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: ThrottlerGuard },

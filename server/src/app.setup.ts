@@ -1,7 +1,7 @@
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
-import { json } from 'express';
+import { json, raw } from 'express';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
@@ -9,6 +9,8 @@ import { createValidationPipe } from './common/validation/validation-pipe';
 import { AppConfig } from './config/app-config';
 
 const PRICE_BOOK_IMPORT_PATH = '/api/price-book/import';
+/** The payment webhook's signature is over the exact bytes sent, so its body stays raw. */
+const PAYMENT_WEBHOOK_PATH = '/api/payments/webhook';
 
 /** Nest's own body parser stays off: configureApp installs one whose errors keep the API's error shape. */
 export const NEST_APP_OPTIONS = { bodyParser: false } as const;
@@ -24,6 +26,7 @@ export function configureApp(app: NestExpressApplication): void {
   // Nest's own body parser is off (see createApp) so that parse errors reach our error shape.
   // A price-book CSV import is the one larger body: a full book (5,000 materials) runs to a few MB.
   app.use(PRICE_BOOK_IMPORT_PATH, json({ limit: '5mb' }));
+  app.use(PAYMENT_WEBHOOK_PATH, raw({ type: () => true, limit: '1mb' }));
   app.use(json({ limit: '1mb' }));
   app.use(errors.middleware);
   app.use(cookieParser());

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { deflateSync } from 'node:zlib';
 import { addMember, bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
 
 let testApp: TestApp;
@@ -23,6 +24,7 @@ describe('the company profile', () => {
       id: owner.companyId,
       name: 'Sedge Hollow Ponds',
       unitSystem: 'us',
+      hasLogo: false,
     });
   });
 
@@ -102,5 +104,94 @@ describe('the company profile', () => {
       .set(...bearer(ownerB))
       .expect(200);
     expect(b.body).toMatchObject({ name: 'Beta Water Features', unitSystem: 'us' });
+  });
+});
+
+/** A valid 1×1 PNG, built by hand from the PNG specification (ISO/IEC 15948): signature, IHDR, IDAT, IEND. */
+function tinyPng(): Buffer {
+  const crcTable = Array.from({ length: 256 }, (_, n) => {
+    let c = n;
+    for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
+    return c >>> 0;
+  });
+  const crc = (bytes: Buffer) => {
+    let c = 0xffffffff;
+    for (const byte of bytes) c = crcTable[(c ^ byte) & 0xff]! ^ (c >>> 8);
+    return (c ^ 0xffffffff) >>> 0;
+  };
+  const chunk = (type: string, data: Buffer) => {
+    const length = Buffer.alloc(4);
+    length.writeUInt32BE(data.length);
+    const body = Buffer.concat([Buffer.from(type, 'ascii'), data]);
+    const sum = Buffer.alloc(4);
+    sum.writeUInt32BE(crc(body));
+    return Buffer.concat([length, body, sum]);
+  };
+  const header = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]); // 1×1, 8-bit RGB
+  const pixels = deflateSync(Buffer.from([0, 0x1f, 0x6f, 0x5c])); // filter 0, one teal pixel
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', header),
+    chunk('IDAT', pixels),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
+}
+
+describe('the company logo', () => {
+  it('takes a PNG from the owner, serves it to members, and refuses other files', async () => {
+    const owner = await signupCompany(testApp);
+    const estimator = await addMember(testApp, owner, 'estimator');
+    const png = tinyPng();
+
+    await testApp.http().get('/api/company/logo').set(...bearer(estimator)).expect(404);
+    await testApp
+      .http()
+      .put('/api/company/logo')
+      .set(...bearer(estimator))
+      .attach('logo', png, { filename: 'logo.png', contentType: 'image/png' })
+      .expect(403);
+
+    const notImage = await testApp
+      .http()
+      .put('/api/company/logo')
+      .set(...bearer(owner))
+      .attach('logo', Buffer.from('<svg onload="alert(1)"/>'), {
+        filename: 'logo.png',
+        contentType: 'image/png',
+      })
+      .expect(400);
+    expect(notImage.body.details).toEqual([{ field: 'logo', message: 'Use a PNG or JPEG image' }]);
+    const tooBig = Buffer.concat([png, Buffer.alloc(512 * 1024)]);
+    await testApp
+      .http()
+      .put('/api/company/logo')
+      .set(...bearer(owner))
+      .attach('logo', tooBig, { filename: 'big.png', contentType: 'image/png' })
+      .expect((response) => expect([400, 413]).toContain(response.status));
+    await testApp.http().put('/api/company/logo').set(...bearer(owner)).expect(400);
+
+    const saved = await testApp
+      .http()
+      .put('/api/company/logo')
+      .set(...bearer(owner))
+      .attach('logo', png, { filename: 'logo.png', contentType: 'image/png' })
+      .expect(200);
+    expect(saved.body.hasLogo).toBe(true);
+    const served = await testApp
+      .http()
+      .get('/api/company/logo')
+      .set(...bearer(estimator))
+      .buffer(true)
+      .parse((response, done) => {
+        const chunks: Buffer[] = [];
+        response.on('data', (chunk: Buffer) => chunks.push(chunk));
+        response.on('end', () => done(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+    expect(served.headers['content-type']).toBe('image/png');
+    expect(Buffer.compare(served.body as Buffer, png)).toBe(0);
+
+    const removed = await testApp.http().delete('/api/company/logo').set(...bearer(owner)).expect(200);
+    expect(removed.body.hasLogo).toBe(false);
   });
 });

@@ -21,6 +21,15 @@ const PUBLIC_ROUTES = [
   'AuthController.previewInvite',
   'AuthController.acceptInvite',
   'HealthController.check',
+  // The homeowner's quote: the link's token is the credential.
+  'PublicQuotesController.view',
+  'PublicQuotesController.accept',
+  'PublicQuotesController.decline',
+  'PublicQuotesController.checkout',
+  'PublicQuotesController.pdf',
+  'PublicQuotesController.logo',
+  // The payment provider: its signature over the body is the credential.
+  'PaymentsWebhookController.receive',
 ].sort();
 
 describe('every route', () => {

@@ -1,8 +1,21 @@
-import { Body, Controller, Get, Patch } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  Headers,
+  Patch,
+  Put,
+  Res,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import { ApiBearerAuth, ApiConsumes, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { CompanyProfile } from '@pondwright/shared';
+import type { Response } from 'express';
 import { AnyRole, Roles } from '../common/decorators/auth.decorators';
-import { CompaniesService } from './companies.service';
+import { CompaniesService, MAX_LOGO_BYTES } from './companies.service';
 import { CompanyProfileDto, UpdateCompanyDto } from './dto/update-company.dto';
 
 @ApiTags('company')
@@ -23,5 +36,43 @@ export class CompaniesController {
   @ApiOkResponse({ type: CompanyProfileDto })
   update(@Body() body: UpdateCompanyDto): Promise<CompanyProfile> {
     return this.companies.update(body);
+  }
+
+  /**
+   * Multipart field `logo`. Multer stops reading one byte past the limit, so an oversized upload is
+   * refused without being held in memory whole.
+   */
+  @Roles('owner')
+  @Put('logo')
+  @ApiConsumes('multipart/form-data')
+  @UseInterceptors(
+    FileInterceptor('logo', { limits: { fileSize: MAX_LOGO_BYTES + 1, files: 1, fields: 0 } }),
+  )
+  @ApiOkResponse({ type: CompanyProfileDto })
+  setLogo(@UploadedFile() file: { buffer: Buffer; size: number } | undefined): Promise<CompanyProfile> {
+    return this.companies.setLogo(file);
+  }
+
+  @Roles('owner')
+  @Delete('logo')
+  @ApiOkResponse({ type: CompanyProfileDto })
+  removeLogo(): Promise<CompanyProfile> {
+    return this.companies.removeLogo();
+  }
+
+  @AnyRole()
+  @Get('logo')
+  async logo(
+    @Headers('if-none-match') ifNoneMatch: string | undefined,
+    @Res() response: Response,
+  ): Promise<void> {
+    const logo = await this.companies.logo();
+    const etag = `"${logo.sha256}"`;
+    response.setHeader('ETag', etag).setHeader('Cache-Control', 'private, no-cache');
+    if (ifNoneMatch === etag) {
+      response.status(304).end();
+      return;
+    }
+    response.status(200).type(logo.contentType).send(logo.bytes);
   }
 }

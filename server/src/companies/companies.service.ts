@@ -1,21 +1,75 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { CompanyProfile } from '@pondwright/shared';
+import { createHash } from 'node:crypto';
 import { Repository } from 'typeorm';
+import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
 import type { UpdateCompanyDto } from './dto/update-company.dto';
+import { CompanyLogo } from './entities/company-logo.entity';
 import { Company } from './entities/company.entity';
+
+/** The largest logo accepted: plenty for a crisp mark on a page, small enough to send with every PDF. */
+export const MAX_LOGO_BYTES = 512 * 1024;
 
 /** The caller's own company: the tenant itself, so it is found by the request's company id. */
 @Injectable()
 export class CompaniesService {
   constructor(
     @InjectRepository(Company) private readonly companies: Repository<Company>,
+    @InjectRepository(CompanyLogo) private readonly logos: Repository<CompanyLogo>,
     private readonly tenant: TenantContext,
   ) {}
 
   async current(): Promise<CompanyProfile> {
-    return toProfile(await this.companies.findOneByOrFail({ id: this.tenant.companyId }));
+    return this.profile(await this.companies.findOneByOrFail({ id: this.tenant.companyId }));
+  }
+
+  /**
+   * Stores the logo after checking its bytes, not its name or declared type: a PNG starts with the
+   * PNG signature (ISO/IEC 15948, 5.2), a JPEG with the SOI marker FF D8 FF (ITU-T T.81, B.1.1.2).
+   */
+  async setLogo(file: { buffer: Buffer; size: number } | undefined): Promise<CompanyProfile> {
+    if (!file || file.size === 0) {
+      throw new AppError('LOGO_INVALID', 'Choose a PNG or JPEG file', [
+        { field: 'logo', message: 'Choose a PNG or JPEG file' },
+      ]);
+    }
+    if (file.size > MAX_LOGO_BYTES) {
+      throw new AppError('LOGO_INVALID', 'The logo is larger than 512 KB', [
+        { field: 'logo', message: 'Use an image of at most 512 KB' },
+      ]);
+    }
+    const contentType = imageTypeOf(file.buffer);
+    if (!contentType) {
+      throw new AppError('LOGO_INVALID', 'The logo must be a PNG or JPEG image', [
+        { field: 'logo', message: 'Use a PNG or JPEG image' },
+      ]);
+    }
+    await this.logos.save({
+      companyId: this.tenant.companyId,
+      contentType,
+      bytes: file.buffer,
+      sha256: createHash('sha256').update(file.buffer).digest('hex'),
+      updatedAt: new Date(),
+    });
+    return this.current();
+  }
+
+  async removeLogo(): Promise<CompanyProfile> {
+    await this.logos.delete({ companyId: this.tenant.companyId });
+    return this.current();
+  }
+
+  async logo(): Promise<CompanyLogo> {
+    const logo = await this.logos.findOneBy({ companyId: this.tenant.companyId });
+    if (!logo) throw new AppError('LOGO_NOT_FOUND', 'Your company has no logo yet.');
+    return logo;
+  }
+
+  private async profile(company: Company): Promise<CompanyProfile> {
+    const hasLogo = await this.logos.existsBy({ companyId: company.id });
+    return { id: company.id, name: company.name, unitSystem: company.unitSystem, hasLogo };
   }
 
   async update(change: UpdateCompanyDto): Promise<CompanyProfile> {
@@ -25,10 +79,14 @@ export class CompaniesService {
     const company = await this.companies.findOneByOrFail({ id: this.tenant.companyId });
     if (change.name !== undefined) company.name = change.name;
     if (change.unitSystem !== undefined) company.unitSystem = change.unitSystem;
-    return toProfile(await this.companies.save(company));
+    return this.profile(await this.companies.save(company));
   }
 }
 
-function toProfile(company: Company): CompanyProfile {
-  return { id: company.id, name: company.name, unitSystem: company.unitSystem };
+const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+
+function imageTypeOf(bytes: Buffer): CompanyLogo['contentType'] | null {
+  if (bytes.subarray(0, 8).equals(PNG_SIGNATURE)) return 'image/png';
+  if (bytes[0] === 0xff && bytes[1] === 0xd8 && bytes[2] === 0xff) return 'image/jpeg';
+  return null;
 }

@@ -62,6 +62,30 @@ export class AppConfig {
   get clientDistDir(): string | undefined {
     return this.get('CLIENT_DIST_DIR');
   }
+  get smtp() {
+    return {
+      host: this.get('SMTP_HOST'),
+      port: this.get('SMTP_PORT'),
+      secure: this.get('SMTP_SECURE'),
+      user: this.get('SMTP_USER'),
+      password: this.get('SMTP_PASSWORD'),
+      from: this.get('MAIL_FROM'),
+    };
+  }
+  /** The developer mailbox's source; never used in production. */
+  get mailboxUrl(): string | undefined {
+    return this.isProduction ? undefined : this.get('MAILBOX_URL')?.replace(/\/$/, '');
+  }
+  get outbox() {
+    return { workerEnabled: this.get('OUTBOX_WORKER'), pollMs: this.get('OUTBOX_POLL_MS') };
+  }
+  get stripe() {
+    return {
+      secretKey: this.get('STRIPE_SECRET_KEY'),
+      webhookSecret: this.get('STRIPE_WEBHOOK_SECRET'),
+      apiUrl: this.get('STRIPE_API_URL'),
+    };
+  }
   get logLevel(): Env['LOG_LEVEL'] {
     return this.get('LOG_LEVEL');
   }

@@ -40,6 +40,27 @@ export const envSchema = databaseEnvSchema.extend({
   LOGIN_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   CLIENT_DIST_DIR: z.string().optional(),
+  // E-mail: nodemailer over SMTP. `npm start` and `npm test` point these at the local fake SMTP server.
+  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  SMTP_SECURE: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((value) => value === 'true'),
+  SMTP_USER: z.string().min(1).optional(),
+  SMTP_PASSWORD: z.string().min(1).optional(),
+  MAIL_FROM: z.string().min(3).default('Pondwright <no-reply@pondwright.example>'),
+  /** The fake SMTP server's HTTP API, read by the developer mailbox page; ignored in production. */
+  MAILBOX_URL: z.url().optional(),
+  OUTBOX_WORKER: z
+    .enum(['on', 'off'])
+    .default('on')
+    .transform((value) => value === 'on'),
+  OUTBOX_POLL_MS: z.coerce.number().int().min(50).max(60_000).default(1000),
+  // Payments: the stripe SDK. STRIPE_API_URL points it at the local fake; unset, it talks to the provider.
+  STRIPE_SECRET_KEY: z.string().min(8).default('sk_test_pondwright_local_fake'),
+  STRIPE_WEBHOOK_SECRET: z.string().min(8).default('whsec_pondwright_local_fake'),
+  STRIPE_API_URL: z.url().optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 

@@ -1,5 +1,6 @@
 import { LoginFailure } from '../auth/entities/login-failure.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
+import { CompanyLogo } from '../companies/entities/company-logo.entity';
 import { Company } from '../companies/entities/company.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { Site } from '../customers/entities/site.entity';
@@ -8,8 +9,14 @@ import { EstimateEvent } from '../estimates/entities/estimate-event.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { Invite } from '../invites/entities/invite.entity';
+import { OutboxMessage } from '../mail/entities/outbox-message.entity';
+import { PaymentEvent } from '../payments/entities/payment-event.entity';
+import { Payment } from '../payments/entities/payment.entity';
 import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
 import { PricedTakeoff } from '../priced-takeoffs/entities/priced-takeoff.entity';
+import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
+import { QuoteDecline } from '../quotes/entities/quote-decline.entity';
+import { QuoteLink } from '../quotes/entities/quote-link.entity';
 import { User } from '../users/entities/user.entity';
 
 export const entities = [
@@ -26,4 +33,11 @@ export const entities = [
   EstimateDraft,
   EstimateVersion,
   EstimateEvent,
+  CompanyLogo,
+  OutboxMessage,
+  QuoteLink,
+  QuoteAcceptance,
+  QuoteDecline,
+  Payment,
+  PaymentEvent,
 ];

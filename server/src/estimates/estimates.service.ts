@@ -215,7 +215,7 @@ export class EstimatesService {
       events: events.map((event) => ({
         id: event.id,
         action: event.action,
-        actorName: event.actor?.name ?? '',
+        actorName: event.actor?.name ?? event.actorLabel ?? '',
         detail: event.detail,
         createdAt: event.createdAt.toISOString(),
       })),
@@ -237,10 +237,18 @@ export class EstimatesService {
     );
     await this.dataSource.transaction(async (manager) => {
       const estimate = await this.lockEstimate(manager, id);
+      refuseIfAccepted(estimate);
       const draft = await this.loadDraft(manager, id);
       if (draft.revision !== revision) {
         throw new StaleDraftError(draftView(draft), changedFields(draft.content, content));
       }
+      // Editing a quote the homeowner may be reading withdraws its link: they must never accept
+      // a version that is being changed. The next version is sent once it is approved.
+      const withdrawn = (await manager.query(
+        `UPDATE quote_links SET revoked_at = now()
+         WHERE estimate_id = $1 AND revoked_at IS NULL AND expires_at > now() RETURNING id`,
+        [id],
+      )) as [unknown[], number];
       const nextRevision = draft.revision + 1;
       await manager.update(
         EstimateDraft,
@@ -268,6 +276,7 @@ export class EstimatesService {
         revision: nextRevision,
         total: computed.priced.totals.total,
         ...(estimate.status !== 'draft' ? { statusBefore: estimate.status } : {}),
+        ...(withdrawn[0].length > 0 ? { quoteLinksWithdrawn: withdrawn[0].length } : {}),
       });
     });
     return this.get(id);
@@ -282,6 +291,7 @@ export class EstimatesService {
     const { revision } = parse(finaliseEstimateRequestSchema, body);
     await this.dataSource.transaction(async (manager) => {
       const estimate = await this.lockEstimate(manager, id);
+      refuseIfAccepted(estimate);
       const draft = await this.loadDraft(manager, id);
       if (draft.revision !== revision) throw new StaleDraftError(draftView(draft));
       if (estimate.status !== 'draft') {
@@ -498,6 +508,16 @@ function parse<S extends z.ZodType>(schema: S, body: unknown): z.infer<S> {
   const result = schema.safeParse(body);
   if (!result.success) throw fieldErrors(toFieldErrors(result.error.issues));
   return result.data;
+}
+
+/** An accepted quote is evidence of what the homeowner agreed to: its estimate is never edited again. */
+function refuseIfAccepted(estimate: Estimate): void {
+  if (estimate.status === 'accepted') {
+    throw new AppError(
+      'ESTIMATE_LOCKED',
+      'Accepted quotes are locked. The accepted version is kept as the homeowner saw it.',
+    );
+  }
 }
 
 function positiveInt(value: string | undefined, fallback: number, field: string, max: number) {

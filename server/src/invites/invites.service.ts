@@ -7,7 +7,10 @@ import { AppError } from '../common/errors/app-error';
 import { TenantRepositories, type TenantRepository } from '../common/tenancy/tenant-repository';
 import { User } from '../users/entities/user.entity';
 import { hashToken, newSecureToken } from '../auth/secure-token';
+import { Company } from '../companies/entities/company.entity';
+import { OutboxService } from '../mail/outbox.service';
 import type { CreateInviteDto } from './dto/create-invite.dto';
+import { inviteMail } from './invite-mail';
 import { Invite } from './entities/invite.entity';
 
 /** Single-use, expiring invitations. The token is shown once (in the link) and stored only hashed. */
@@ -19,6 +22,7 @@ export class InvitesService {
     repositories: TenantRepositories,
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly config: AppConfig,
+    private readonly outbox: OutboxService,
   ) {
     this.invites = repositories.for(Invite);
   }
@@ -50,6 +54,7 @@ export class InvitesService {
       expiresAt: new Date(Date.now() + this.config.inviteTtlHours * 3600 * 1000),
       invitedById,
     });
+    const inviteUrl = `${this.config.publicAppUrl}/accept-invite/${token}`;
     const saved = await this.dataSource.transaction(async (manager) => {
       await manager.update(
         Invite,
@@ -61,13 +66,28 @@ export class InvitesService {
         },
         { revokedAt: new Date() },
       );
-      return this.invites.save(invite, manager);
+      const stored = await this.invites.save(invite, manager);
+      const [company, inviter] = await Promise.all([
+        manager.findOneByOrFail(Company, { id: stored.companyId }),
+        manager.findOneByOrFail(User, { id: invitedById }),
+      ]);
+      await this.outbox.enqueue(manager, {
+        companyId: stored.companyId,
+        kind: 'invite',
+        to: input.email,
+        replyTo: inviter.email,
+        ...inviteMail({
+          companyName: company.name,
+          inviterName: inviter.name,
+          role: input.role,
+          url: inviteUrl,
+          expiresAt: stored.expiresAt,
+        }),
+      });
+      return stored;
     });
     const inviter = await this.dataSource.manager.findOneByOrFail(User, { id: invitedById });
-    return {
-      ...toPendingInvite({ ...saved, invitedBy: inviter }),
-      inviteUrl: `${this.config.publicAppUrl}/accept-invite/${token}`,
-    };
+    return { ...toPendingInvite({ ...saved, invitedBy: inviter }), inviteUrl };
   }
 
   async revoke(id: string): Promise<void> {

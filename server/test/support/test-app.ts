@@ -6,6 +6,8 @@ import type TestAgent from 'supertest/lib/agent';
 import { DataSource } from 'typeorm';
 import { AppModule } from '../../src/app.module';
 import { configureApp, NEST_APP_OPTIONS } from '../../src/app.setup';
+import { AppConfig } from '../../src/config/app-config';
+import { validateEnv } from '../../src/config/env.schema';
 
 export type TestApp = {
   app: NestExpressApplication;
@@ -14,9 +16,20 @@ export type TestApp = {
   close: () => Promise<void>;
 };
 
-/** The real application, wired exactly as in production, against the test database. */
-export async function createTestApp(): Promise<TestApp> {
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+/**
+ * The real application, wired exactly as in production, against the test database. `env` overrides
+ * settings for this app only (the environment itself is read once, when the config module loads), e.g.
+ * the port of a fake SMTP server the test started.
+ */
+export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+  const settings = validateEnv({ ...process.env, ...env });
+  const config = new AppConfig({
+    get: (key: keyof typeof settings) => settings[key],
+  } as unknown as ConstructorParameters<typeof AppConfig>[0]);
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
+    .overrideProvider(AppConfig)
+    .useValue(config)
+    .compile();
   const app = moduleRef.createNestApplication<NestExpressApplication>({
     ...NEST_APP_OPTIONS,
     logger: false,

@@ -11,3 +11,4 @@ process.env.TRUST_PROXY = 'true';
 process.env.LOG_LEVEL = 'silent';
 process.env.RATE_LIMIT_PER_MINUTE = '100000';
 process.env.PUBLIC_APP_URL = 'http://app.test';
+process.env.OUTBOX_WORKER = 'off';

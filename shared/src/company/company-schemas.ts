@@ -15,9 +15,13 @@ export const updateCompanySchema = z
   });
 export type UpdateCompanyInput = z.infer<typeof updateCompanySchema>;
 
-/** The company as every member sees it: its name and the units new estimates start in. */
+/**
+ * The company as every member sees it: its name, the units new estimates start in, and whether it has
+ * a logo (served by `GET /api/company/logo`, shown on quotes).
+ */
 export type CompanyProfile = {
   id: string;
   name: string;
   unitSystem: z.infer<typeof unitSystemSchema>;
+  hasLogo: boolean;
 };

@@ -19,4 +19,5 @@ export class CompanyProfileDto {
   @ApiProperty() id: string;
   @ApiProperty() name: string;
   @ApiProperty({ enum: ['us', 'metric'] }) unitSystem: string;
+  @ApiProperty() hasLogo: boolean;
 }

@@ -4,6 +4,7 @@ import { PriceBookVersions1796090400000 } from './1796090400000-price-book-versi
 import { PricedTakeoffs1796094000000 } from './1796094000000-priced-takeoffs';
 import { CustomersAndSites1796097600000 } from './1796097600000-customers-and-sites';
 import { Estimates1796101200000 } from './1796101200000-estimates';
+import { QuotesPaymentsOutbox1796104800000 } from './1796104800000-quotes-payments-outbox';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   PricedTakeoffs1796094000000,
   CustomersAndSites1796097600000,
   Estimates1796101200000,
+  QuotesPaymentsOutbox1796104800000,
 ];

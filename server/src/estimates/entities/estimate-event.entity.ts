@@ -22,8 +22,12 @@ export class EstimateEvent implements CompanyOwned {
   @Column({ name: 'estimate_id', type: 'uuid' })
   estimateId: string;
 
-  @Column({ name: 'actor_id', type: 'uuid' })
-  actorId: string;
+  /** Null when the homeowner or the payment provider acted; `actorLabel` names them. */
+  @Column({ name: 'actor_id', type: 'uuid', nullable: true })
+  actorId: string | null;
+
+  @Column({ name: 'actor_label', type: 'text', nullable: true })
+  actorLabel: string | null;
 
   @ManyToOne(() => User)
   @JoinColumn({ name: 'actor_id' })

@@ -1,0 +1,67 @@
+import { Global, Module } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { NestFactory } from '@nestjs/core';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { AppConfig } from '../config/app-config';
+import { QUOTE_PAGE_ROUTE, QuotePageHostModule } from './quote-page-host.module';
+
+// A built client of two pages, served as app.module serves it: the staff app's index.html for page
+// paths, quote.html for `/q/<token>`, and `/api` left to the API.
+const dist = mkdtempSync(join(tmpdir(), 'pondwright-dist-'));
+writeFileSync(join(dist, 'index.html'), '<!doctype html><title>staff app</title>');
+writeFileSync(join(dist, 'quote.html'), '<!doctype html><title>quote page</title>');
+
+@Global()
+@Module({
+  providers: [{ provide: AppConfig, useValue: { clientDistDir: dist } }],
+  exports: [AppConfig],
+})
+class ConfigStub {}
+
+// As in app.module. Built with NestFactory as main.ts does: ServeStaticModule picks its Express loader
+// when the module is created, so a testing module (created before its HTTP adapter) would serve nothing.
+@Module({
+  imports: [
+    ConfigStub,
+    ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*rest}', QUOTE_PAGE_ROUTE] }),
+    QuotePageHostModule,
+  ],
+})
+class HostedClient {}
+
+let app: NestExpressApplication;
+
+beforeAll(async () => {
+  app = await NestFactory.create<NestExpressApplication>(HostedClient, { logger: false });
+  app.setGlobalPrefix('api');
+  await app.init();
+});
+
+afterAll(async () => {
+  await app?.close();
+  rmSync(dist, { recursive: true, force: true });
+});
+
+describe('the quote page host', () => {
+  it('serves quote.html for /q/<token>, with or without a payment return, never cached', async () => {
+    for (const path of ['/q/qt_7hGm2pXc9RkLw4Vn', '/q/qt_7hGm2pXc9RkLw4Vn?payment=success']) {
+      const response = await request(app.getHttpServer()).get(path).expect(200);
+      expect(response.text).toContain('quote page');
+      expect(response.headers['content-type']).toMatch(/text\/html/);
+      expect(response.headers['cache-control']).toBe('no-store');
+      expect(response.headers['x-robots-tag']).toBe('noindex, nofollow');
+    }
+  });
+
+  it('leaves the staff app’s pages and the API alone', async () => {
+    const staff = await request(app.getHttpServer()).get('/estimates/42').expect(200);
+    expect(staff.text).toContain('staff app');
+    const api = await request(app.getHttpServer()).get('/api/quotes/qt_unknown').expect(404);
+    expect(api.text).not.toContain('quote page');
+  });
+});

@@ -1,0 +1,221 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import {
+  sendQuoteRequestSchema,
+  type EstimateQuoteStatus,
+  type EstimateStatus,
+  type QuoteLinkView,
+} from '@pondwright/shared';
+import { DataSource, IsNull, MoreThan, type EntityManager } from 'typeorm';
+import { hashToken, newSecureToken } from '../auth/secure-token';
+import { AppError } from '../common/errors/app-error';
+import { TenantContext } from '../common/tenancy/tenant-context';
+import { isUuid } from '../common/tenancy/tenant-repository';
+import { AppConfig } from '../config/app-config';
+import { Company } from '../companies/entities/company.entity';
+import { Customer } from '../customers/entities/customer.entity';
+import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
+import { Estimate } from '../estimates/entities/estimate.entity';
+import { parseBody } from '../common/validation/parse-body';
+import { OutboxService } from '../mail/outbox.service';
+import { User } from '../users/entities/user.entity';
+import { QuoteLink } from './entities/quote-link.entity';
+import { recordEstimateEvent } from './estimate-events';
+import { quoteSentMail } from './quote-mail';
+import { acceptanceView, loadQuoteRecords, staffPaymentView } from './quote-records';
+
+/** Statuses from which the latest version may be sent (again). */
+const SENDABLE: ReadonlyArray<EstimateStatus> = ['approved', 'sent', 'viewed', 'declined', 'expired'];
+
+/** Staff's side of the quote: send (and resend) a link for the latest version, list and revoke links. */
+@Injectable()
+export class QuoteLinksService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly tenant: TenantContext,
+    private readonly outbox: OutboxService,
+    private readonly config: AppConfig,
+  ) {}
+
+  /**
+   * In one transaction: revokes the estimate's other open links, creates a link for the latest version,
+   * queues the e-mail (with the PDF built at send time) and marks the estimate sent. The token exists
+   * only in the queued e-mail; the database keeps its SHA-256.
+   */
+  async send(estimateId: string, body: unknown, actorId: string): Promise<EstimateQuoteStatus> {
+    const request = parseBody(sendQuoteRequestSchema, body);
+    await this.dataSource.transaction(async (manager) => {
+      const estimate = await this.lockEstimate(manager, estimateId);
+      if (estimate.status === 'accepted') {
+        throw new AppError('ESTIMATE_LOCKED', 'This quote was accepted; it cannot be sent again.');
+      }
+      if (!SENDABLE.includes(estimate.status)) {
+        throw new AppError(
+          'ESTIMATE_NOT_SENDABLE',
+          'Only an approved version can be sent. Finalise the draft (and have it approved if it needs it) first.',
+        );
+      }
+      const version = await manager.findOneOrFail(EstimateVersion, {
+        where: { estimateId },
+        order: { versionNumber: 'DESC' },
+      });
+      const now = new Date();
+      await manager.update(
+        QuoteLink,
+        { estimateId, revokedAt: IsNull(), expiresAt: MoreThan(now) },
+        { revokedAt: now },
+      );
+      const token = newSecureToken();
+      const expiresAt = new Date(now.getTime() + request.expiresInDays * 86_400_000);
+      const link = await manager.save(
+        manager.create(QuoteLink, {
+          companyId: estimate.companyId,
+          estimateId,
+          versionId: version.id,
+          tokenHash: hashToken(token),
+          recipientEmail: request.recipientEmail,
+          expiresAt,
+          revokedAt: null,
+          firstViewedAt: null,
+          createdById: actorId,
+        }),
+      );
+      const [company, customer, sender] = await Promise.all([
+        manager.findOneByOrFail(Company, { id: estimate.companyId }),
+        manager.findOneByOrFail(Customer, { id: estimate.customerId }),
+        manager.findOneByOrFail(User, { id: actorId }),
+      ]);
+      const mail = quoteSentMail({
+        companyName: company.name,
+        customerName: customer.name,
+        estimateNumber: estimate.number,
+        title: version.content.title,
+        url: `${this.config.publicAppUrl}/q/${token}`,
+        total: version.computed.priced.totals.total,
+        currency: version.computed.priced.currency,
+        expiresAt,
+        message: request.message || undefined,
+      });
+      await this.outbox.enqueue(manager, {
+        companyId: estimate.companyId,
+        kind: 'quote-sent',
+        to: request.recipientEmail,
+        replyTo: sender.email,
+        ...mail,
+        attachments: [
+          { kind: 'quote-pdf', linkId: link.id, filename: `quote-${estimate.number}.pdf` },
+        ],
+      });
+      await manager.update(Estimate, { id: estimateId }, { status: 'sent' });
+      await recordEstimateEvent(manager, {
+        companyId: estimate.companyId,
+        estimateId,
+        actorId,
+        action: 'quote-sent',
+        detail: {
+          versionNumber: version.versionNumber,
+          recipientEmail: request.recipientEmail,
+          linkId: link.id,
+          expiresAt: expiresAt.toISOString(),
+          statusBefore: estimate.status,
+        },
+      });
+    });
+    return this.status(estimateId);
+  }
+
+  async revoke(estimateId: string, linkId: string, actorId: string): Promise<EstimateQuoteStatus> {
+    await this.dataSource.transaction(async (manager) => {
+      const estimate = await this.lockEstimate(manager, estimateId);
+      const link = isUuid(linkId)
+        ? await manager.findOneBy(QuoteLink, { id: linkId, estimateId, companyId: estimate.companyId })
+        : null;
+      if (!link) throw new AppError('NOT_FOUND', 'Quote link not found');
+      if (link.revokedAt) return;
+      await manager.update(QuoteLink, { id: link.id }, { revokedAt: new Date() });
+      await recordEstimateEvent(manager, {
+        companyId: estimate.companyId,
+        estimateId,
+        actorId,
+        action: 'quote-link-revoked',
+        detail: { linkId: link.id, recipientEmail: link.recipientEmail },
+      });
+    });
+    return this.status(estimateId);
+  }
+
+  async status(estimateId: string): Promise<EstimateQuoteStatus> {
+    const manager = this.dataSource.manager;
+    const estimate = await this.findEstimate(manager, estimateId);
+    const [links, records] = await Promise.all([
+      manager.find(QuoteLink, {
+        where: { estimateId: estimate.id, companyId: estimate.companyId },
+        relations: { version: true, createdBy: true },
+        order: { createdAt: 'DESC' },
+      }),
+      loadQuoteRecords(manager, estimate.id),
+    ]);
+    const acceptedVersion = records.acceptance
+      ? await manager.findOneByOrFail(EstimateVersion, { id: records.acceptance.versionId })
+      : null;
+    return {
+      links: links.map((link) => linkView(link, records.acceptance?.linkId ?? null)),
+      acceptance:
+        records.acceptance && acceptedVersion
+          ? {
+              ...acceptanceView(records.acceptance),
+              versionNumber: acceptedVersion.versionNumber,
+              contentSha256: records.acceptance.contentSha256,
+              ip: records.acceptance.ip,
+              userAgent: records.acceptance.userAgent,
+            }
+          : null,
+      declined: records.decline
+        ? { at: records.decline.declinedAt.toISOString(), reason: records.decline.reason }
+        : null,
+      payment: records.payment ? staffPaymentView(records.payment) : null,
+    };
+  }
+
+  private async findEstimate(manager: EntityManager, id: string): Promise<Estimate> {
+    const estimate = isUuid(id)
+      ? await manager.findOneBy(Estimate, { id, companyId: this.tenant.companyId })
+      : null;
+    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
+    return estimate;
+  }
+
+  private async lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
+    const estimate = isUuid(id)
+      ? await manager.findOne(Estimate, {
+          where: { id, companyId: this.tenant.companyId },
+          lock: { mode: 'pessimistic_write' },
+        })
+      : null;
+    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
+    return estimate;
+  }
+}
+
+function linkView(link: QuoteLink, acceptedLinkId: string | null): QuoteLinkView {
+  const now = Date.now();
+  const status: QuoteLinkView['status'] =
+    link.id === acceptedLinkId
+      ? 'used'
+      : link.revokedAt
+        ? 'revoked'
+        : link.expiresAt.getTime() <= now
+          ? 'expired'
+          : 'active';
+  return {
+    id: link.id,
+    versionNumber: link.version?.versionNumber ?? 0,
+    recipientEmail: link.recipientEmail,
+    status,
+    createdAt: link.createdAt.toISOString(),
+    expiresAt: link.expiresAt.toISOString(),
+    revokedAt: link.revokedAt?.toISOString() ?? null,
+    firstViewedAt: link.firstViewedAt?.toISOString() ?? null,
+    createdByName: link.createdBy?.name ?? '',
+  };
+}

@@ -1,0 +1,33 @@
+import { Module, type OnModuleInit } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import { OutboxService } from '../mail/outbox.service';
+import { PaymentsModule } from '../payments/payments.module';
+import { QuoteLink } from './entities/quote-link.entity';
+import { EstimateQuoteController } from './estimate-quote.controller';
+import { PublicQuotesController } from './public-quotes.controller';
+import { PublicQuotesService } from './public-quotes.service';
+import { QuoteLinksService } from './quote-links.service';
+import { StaffQuotePdfService } from './staff-quote-pdf.service';
+
+@Module({
+  imports: [PaymentsModule],
+  controllers: [EstimateQuoteController, PublicQuotesController],
+  providers: [QuoteLinksService, PublicQuotesService, StaffQuotePdfService],
+})
+export class QuotesModule implements OnModuleInit {
+  constructor(
+    private readonly outbox: OutboxService,
+    private readonly quotes: PublicQuotesService,
+    @InjectDataSource() private readonly dataSource: DataSource,
+  ) {}
+
+  /** The quote e-mail's PDF is rendered when the e-mail is sent, from the link it was queued with. */
+  onModuleInit(): void {
+    this.outbox.registerAttachmentBuilder('quote-pdf', async (attachment) => {
+      const link = await this.dataSource.manager.findOneByOrFail(QuoteLink, { id: attachment.linkId });
+      const pdf = await this.quotes.pdfForLink(link);
+      return { filename: attachment.filename, content: pdf.bytes, contentType: 'application/pdf' };
+    });
+  }
+}
