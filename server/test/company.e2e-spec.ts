@@ -143,7 +143,11 @@ describe('the company logo', () => {
     const estimator = await addMember(testApp, owner, 'estimator');
     const png = tinyPng();
 
-    await testApp.http().get('/api/company/logo').set(...bearer(estimator)).expect(404);
+    await testApp
+      .http()
+      .get('/api/company/logo')
+      .set(...bearer(estimator))
+      .expect(404);
     await testApp
       .http()
       .put('/api/company/logo')
@@ -168,7 +172,11 @@ describe('the company logo', () => {
       .set(...bearer(owner))
       .attach('logo', tooBig, { filename: 'big.png', contentType: 'image/png' })
       .expect((response) => expect([400, 413]).toContain(response.status));
-    await testApp.http().put('/api/company/logo').set(...bearer(owner)).expect(400);
+    await testApp
+      .http()
+      .put('/api/company/logo')
+      .set(...bearer(owner))
+      .expect(400);
 
     const saved = await testApp
       .http()
@@ -191,7 +199,11 @@ describe('the company logo', () => {
     expect(served.headers['content-type']).toBe('image/png');
     expect(Buffer.compare(served.body as Buffer, png)).toBe(0);
 
-    const removed = await testApp.http().delete('/api/company/logo').set(...bearer(owner)).expect(200);
+    const removed = await testApp
+      .http()
+      .delete('/api/company/logo')
+      .set(...bearer(owner))
+      .expect(200);
     expect(removed.body.hasLogo).toBe(false);
   });
 });

@@ -56,7 +56,9 @@ afterAll(async () => {
 type Owner = Awaited<ReturnType<typeof signupCompany>>;
 
 /** An estimate sent, opened and accepted with no options; answers the token and the quote. */
-async function acceptedQuote(owner: Owner): Promise<{ estimate: EstimateView; token: string; quote: QuoteView }> {
+async function acceptedQuote(
+  owner: Owner,
+): Promise<{ estimate: EstimateView; token: string; quote: QuoteView }> {
   const estimate = await approvedEstimate(testApp, owner, 'Juniper Ashdown');
   await testApp
     .http()
@@ -77,7 +79,12 @@ async function acceptedQuote(owner: Owner): Promise<{ estimate: EstimateView; to
     await testApp
       .http()
       .post(`/api/quotes/${token}/accept`)
-      .send({ fullName: 'Juniper Ashdown', consent: true, optionIds: [], contentSha256: shown.estimate.contentSha256 })
+      .send({
+        fullName: 'Juniper Ashdown',
+        consent: true,
+        optionIds: [],
+        contentSha256: shown.estimate.contentSha256,
+      })
       .expect(200)
   ).body as QuoteView;
   return { estimate, token, quote };
@@ -138,7 +145,9 @@ describe('deposit payment', () => {
 
     await outbox.drain();
     const receipts = smtp.messages().filter((m) => /deposit/i.test(m.subject));
-    expect(receipts.map((m) => m.to[0]).sort()).toEqual(['juniper@example.test', owner.email].sort());
+    expect(receipts.map((m) => m.to[0]).sort()).toEqual(
+      ['juniper@example.test', owner.email].sort(),
+    );
 
     const again = await testApp.http().post(`/api/quotes/${token}/checkout`).expect(409);
     expect(again.body.code).toBe('DEPOSIT_ALREADY_PAID');
@@ -171,11 +180,14 @@ describe('deposit payment', () => {
     await testApp.http().post('/api/payments/webhook').send({}).expect(400);
     expect((await paymentRows(estimate.id))[0]!.status).toBe('pending');
     expect(
-      await testApp.dataSource.query(`SELECT 1 FROM payment_events WHERE event_id LIKE 'evt_forged_%'`),
+      await testApp.dataSource.query(
+        `SELECT 1 FROM payment_events WHERE event_id LIKE 'evt_forged_%'`,
+      ),
     ).toEqual([]);
 
     // The same event properly signed (the provider's SDK makes the header) counts once, however often it comes.
-    const signed = () => stripe.webhooks.generateTestHeaderString({ payload, secret: WEBHOOK_SECRET });
+    const signed = () =>
+      stripe.webhooks.generateTestHeaderString({ payload, secret: WEBHOOK_SECRET });
     expect((await post(signed()).expect(200)).body).toEqual({ received: true, duplicate: false });
     expect((await post(signed()).expect(200)).body).toEqual({ received: true, duplicate: true });
     const results = await Promise.all([post(signed()), post(signed())]);

@@ -29,7 +29,7 @@ beforeEach(() => smtp.clear());
 
 type Owner = Awaited<ReturnType<typeof signupCompany>>;
 
-function send(owner: Owner, estimateId: string, recipientEmail = "wren@example.test") {
+function send(owner: Owner, estimateId: string, recipientEmail = 'wren@example.test') {
   return testApp
     .http()
     .post(`/api/estimates/${estimateId}/send`)
@@ -66,7 +66,10 @@ describe('sending a quote', () => {
     const sent = await send(owner, estimate.id).expect(201);
     const status = sent.body as EstimateQuoteStatus;
     expect(status.links).toHaveLength(1);
-    expect(status.links[0]).toMatchObject({ status: 'active', recipientEmail: 'wren@example.test' });
+    expect(status.links[0]).toMatchObject({
+      status: 'active',
+      recipientEmail: 'wren@example.test',
+    });
     expect(JSON.stringify(status)).not.toMatch(/token/i);
 
     // Nothing leaves before the worker runs: the e-mail waits in the outbox.
@@ -76,7 +79,10 @@ describe('sending a quote', () => {
     expect(mail!.to).toEqual(['wren@example.test']);
     expect(mail!.text).toContain('Here is the quote we talked about.');
     expect(mail!.attachments).toEqual([
-      expect.objectContaining({ filename: `quote-${estimate.number}.pdf`, contentType: 'application/pdf' }),
+      expect.objectContaining({
+        filename: `quote-${estimate.number}.pdf`,
+        contentType: 'application/pdf',
+      }),
     ]);
     const token = tokenFromMail(mail!.text);
     // 32 random bytes: 256 bits, above the 128 asked for; only the SHA-256 is stored.
@@ -101,7 +107,11 @@ describe('sending a quote', () => {
 
     await view(token).expect(200);
     const after = (
-      await testApp.http().get(`/api/estimates/${estimate.id}`).set(...bearer(owner)).expect(200)
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}`)
+        .set(...bearer(owner))
+        .expect(200)
     ).body as EstimateView;
     expect(after.status).toBe('viewed');
     expect(after.events.filter((e) => e.action === 'quote-viewed')).toHaveLength(1);
@@ -131,7 +141,11 @@ describe('sending a quote', () => {
     ).body as EstimateView;
     const refused = await send(owner, draft.id).expect(409);
     expect(refused.body.code).toBe('ESTIMATE_NOT_SENDABLE');
-    expect(await testApp.dataSource.query('SELECT 1 FROM quote_links WHERE estimate_id = $1', [draft.id])).toEqual([]);
+    expect(
+      await testApp.dataSource.query('SELECT 1 FROM quote_links WHERE estimate_id = $1', [
+        draft.id,
+      ]),
+    ).toEqual([]);
   });
 
   it('hides one company’s quotes from another', async () => {
@@ -139,8 +153,16 @@ describe('sending a quote', () => {
     const other = await signupCompany(testApp);
     const estimate = await approvedEstimate(testApp, owner);
     await send(other, estimate.id).expect(404);
-    await testApp.http().get(`/api/estimates/${estimate.id}/quote`).set(...bearer(other)).expect(404);
-    await testApp.http().get(`/api/estimates/${estimate.id}/quote.pdf`).set(...bearer(other)).expect(404);
+    await testApp
+      .http()
+      .get(`/api/estimates/${estimate.id}/quote`)
+      .set(...bearer(other))
+      .expect(404);
+    await testApp
+      .http()
+      .get(`/api/estimates/${estimate.id}/quote.pdf`)
+      .set(...bearer(other))
+      .expect(404);
   });
 });
 
@@ -165,7 +187,11 @@ describe('dead and wrong links', () => {
 
     // Staff revoke by hand.
     const status = (
-      await testApp.http().get(`/api/estimates/${estimate.id}/quote`).set(...bearer(owner)).expect(200)
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}/quote`)
+        .set(...bearer(owner))
+        .expect(200)
     ).body as EstimateQuoteStatus;
     const active = status.links.find((link) => link.status === 'active')!;
     await testApp
@@ -183,7 +209,11 @@ describe('dead and wrong links', () => {
     const expired = await view(third).expect(410);
     expect(expired.body.code).toBe('QUOTE_LINK_EXPIRED');
     const after = (
-      await testApp.http().get(`/api/estimates/${estimate.id}`).set(...bearer(owner)).expect(200)
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}`)
+        .set(...bearer(owner))
+        .expect(200)
     ).body as EstimateView;
     expect(after.status).toBe('expired');
   });
@@ -200,13 +230,23 @@ describe('accepting and declining', () => {
     const wrongVersion = await testApp
       .http()
       .post(`/api/quotes/${token}/accept`)
-      .send({ fullName: 'Wren Halloway', consent: true, optionIds: [], contentSha256: 'a'.repeat(64) })
+      .send({
+        fullName: 'Wren Halloway',
+        consent: true,
+        optionIds: [],
+        contentSha256: 'a'.repeat(64),
+      })
       .expect(409);
     expect(wrongVersion.body.code).toBe('QUOTE_VERSION_CHANGED');
     const noConsent = await testApp
       .http()
       .post(`/api/quotes/${token}/accept`)
-      .send({ fullName: 'W', consent: false, optionIds: [], contentSha256: quote.estimate.contentSha256 })
+      .send({
+        fullName: 'W',
+        consent: false,
+        optionIds: [],
+        contentSha256: quote.estimate.contentSha256,
+      })
       .expect(400);
     expect(noConsent.body.details.map((d: { field: string }) => d.field).sort()).toEqual([
       'consent',
@@ -252,7 +292,11 @@ describe('accepting and declining', () => {
     expect((await accept(token, quote, []).expect(409)).body.code).toBe('QUOTE_ALREADY_ANSWERED');
     await testApp.http().post(`/api/quotes/${token}/decline`).send({}).expect(409);
     const current = (
-      await testApp.http().get(`/api/estimates/${estimate.id}`).set(...bearer(owner)).expect(200)
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}`)
+        .set(...bearer(owner))
+        .expect(200)
     ).body as EstimateView;
     expect(current.status).toBe('accepted');
     const edit = await testApp
@@ -264,9 +308,10 @@ describe('accepting and declining', () => {
     expect(edit.body.code).toBe('ESTIMATE_LOCKED');
     expect((await send(owner, estimate.id).expect(409)).body.code).toBe('ESTIMATE_LOCKED');
     await expect(
-      testApp.dataSource.query(`UPDATE quote_acceptances SET full_name = 'Someone Else' WHERE estimate_id = $1`, [
-        estimate.id,
-      ]),
+      testApp.dataSource.query(
+        `UPDATE quote_acceptances SET full_name = 'Someone Else' WHERE estimate_id = $1`,
+        [estimate.id],
+      ),
     ).rejects.toThrow(/cannot be changed/);
 
     // Both sides are told, through the outbox.
@@ -293,7 +338,11 @@ describe('accepting and declining', () => {
     ).body as QuoteView;
     expect(declined.state).toBe('declined');
     const status = (
-      await testApp.http().get(`/api/estimates/${estimate.id}/quote`).set(...bearer(owner)).expect(200)
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}/quote`)
+        .set(...bearer(owner))
+        .expect(200)
     ).body as EstimateQuoteStatus;
     expect(status.declined).toMatchObject({ reason: 'We decided to wait until spring.' });
 
@@ -301,7 +350,11 @@ describe('accepting and declining', () => {
     const again = await sendAndReadToken(owner, estimate);
     await view(again).expect(200);
     const current = (
-      await testApp.http().get(`/api/estimates/${estimate.id}`).set(...bearer(owner)).expect(200)
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}`)
+        .set(...bearer(owner))
+        .expect(200)
     ).body as EstimateView;
     await testApp
       .http()
@@ -385,8 +438,16 @@ describe('developer mailbox', () => {
     const owner = await signupCompany(testApp);
     const estimator = await addMember(testApp, owner, 'estimator');
     await outbox.drain();
-    await testApp.http().get('/api/dev/mailbox').set(...bearer(estimator)).expect(403);
-    const listed = await testApp.http().get('/api/dev/mailbox').set(...bearer(owner)).expect(200);
+    await testApp
+      .http()
+      .get('/api/dev/mailbox')
+      .set(...bearer(estimator))
+      .expect(403);
+    const listed = await testApp
+      .http()
+      .get('/api/dev/mailbox')
+      .set(...bearer(owner))
+      .expect(200);
     expect(Array.isArray(listed.body)).toBe(true);
   });
 });

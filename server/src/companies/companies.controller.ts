@@ -49,7 +49,9 @@ export class CompaniesController {
     FileInterceptor('logo', { limits: { fileSize: MAX_LOGO_BYTES + 1, files: 1, fields: 0 } }),
   )
   @ApiOkResponse({ type: CompanyProfileDto })
-  setLogo(@UploadedFile() file: { buffer: Buffer; size: number } | undefined): Promise<CompanyProfile> {
+  setLogo(
+    @UploadedFile() file: { buffer: Buffer; size: number } | undefined,
+  ): Promise<CompanyProfile> {
     return this.companies.setLogo(file);
   }
 

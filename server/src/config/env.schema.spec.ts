@@ -47,3 +47,40 @@ function captureError(run: () => unknown): string {
   }
   throw new Error('expected an error');
 }
+
+describe('production settings', () => {
+  const base = {
+    DB_PASSWORD: 'x',
+    JWT_SECRET: 'k7Qp2vX9mR4tL8wZ1nB6cF3hJ5dS0gYa',
+    NODE_ENV: 'production',
+  };
+
+  it('refuses the local fakes’ payment settings and a missing public address', () => {
+    let message = '';
+    try {
+      validateEnv({ ...base, STRIPE_API_URL: 'http://127.0.0.1:12111' });
+    } catch (error) {
+      message = (error as Error).message;
+    }
+    for (const name of [
+      'STRIPE_SECRET_KEY',
+      'STRIPE_WEBHOOK_SECRET',
+      'STRIPE_API_URL',
+      'PUBLIC_APP_URL',
+    ]) {
+      expect(message).toContain(name);
+    }
+  });
+
+  it('accepts real provider settings', () => {
+    const env = validateEnv({
+      ...base,
+      STRIPE_SECRET_KEY: 'sk_live_example_only',
+      STRIPE_WEBHOOK_SECRET: 'whsec_example_only',
+      PUBLIC_APP_URL: 'https://ponds.example',
+      SMTP_HOST: 'smtp.example',
+    });
+    expect(env.SMTP_HOST).toBe('smtp.example');
+    expect(env.STRIPE_API_URL).toBeUndefined();
+  });
+});

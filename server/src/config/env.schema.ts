@@ -11,58 +11,78 @@ export const databaseEnvSchema = z.object({
   DB_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
 });
 
-export const envSchema = databaseEnvSchema.extend({
-  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
-  HOST: z.string().min(1).default('127.0.0.1'),
-  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
-  PUBLIC_APP_URL: z.url().optional(),
-  TRUST_PROXY: z
-    .enum(['true', 'false'])
-    .default('false')
-    .transform((value) => value === 'true'),
-  // HS256 needs a key at least as long as its output: 256 bits (RFC 7518 §3.2).
-  JWT_SECRET: z
-    .string({ error: 'JWT_SECRET is required (at least 32 bytes of random data)' })
-    .refine(
-      (secret) => Buffer.byteLength(secret, 'utf8') >= 32,
-      'JWT_SECRET must be at least 32 bytes (256 bits)',
-    )
-    .refine((secret) => new Set(secret).size >= 10, 'JWT_SECRET looks weak: use random data'),
-  JWT_ACCESS_TTL_SECONDS: z.coerce.number().int().min(30).max(900).default(900),
-  REFRESH_TTL_DAYS: z.coerce.number().int().min(1).max(90).default(14),
-  INVITE_TTL_HOURS: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .max(24 * 30)
-    .default(72),
-  LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(10),
-  LOGIN_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
-  RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
-  CLIENT_DIST_DIR: z.string().optional(),
-  // E-mail: nodemailer over SMTP. `npm start` and `npm test` point these at the local fake SMTP server.
-  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
-  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
-  SMTP_SECURE: z
-    .enum(['true', 'false'])
-    .default('false')
-    .transform((value) => value === 'true'),
-  SMTP_USER: z.string().min(1).optional(),
-  SMTP_PASSWORD: z.string().min(1).optional(),
-  MAIL_FROM: z.string().min(3).default('Pondwright <no-reply@pondwright.example>'),
-  /** The fake SMTP server's HTTP API, read by the developer mailbox page; ignored in production. */
-  MAILBOX_URL: z.url().optional(),
-  OUTBOX_WORKER: z
-    .enum(['on', 'off'])
-    .default('on')
-    .transform((value) => value === 'on'),
-  OUTBOX_POLL_MS: z.coerce.number().int().min(50).max(60_000).default(1000),
-  // Payments: the stripe SDK. STRIPE_API_URL points it at the local fake; unset, it talks to the provider.
-  STRIPE_SECRET_KEY: z.string().min(8).default('sk_test_pondwright_local_fake'),
-  STRIPE_WEBHOOK_SECRET: z.string().min(8).default('whsec_pondwright_local_fake'),
-  STRIPE_API_URL: z.url().optional(),
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-});
+const LOCAL_FAKE_STRIPE_KEY = 'sk_test_pondwright_local_fake';
+const LOCAL_FAKE_WEBHOOK_SECRET = 'whsec_pondwright_local_fake';
+
+export const envSchema = databaseEnvSchema
+  .extend({
+    NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+    HOST: z.string().min(1).default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+    PUBLIC_APP_URL: z.url().optional(),
+    TRUST_PROXY: z
+      .enum(['true', 'false'])
+      .default('false')
+      .transform((value) => value === 'true'),
+    // HS256 needs a key at least as long as its output: 256 bits (RFC 7518 §3.2).
+    JWT_SECRET: z
+      .string({ error: 'JWT_SECRET is required (at least 32 bytes of random data)' })
+      .refine(
+        (secret) => Buffer.byteLength(secret, 'utf8') >= 32,
+        'JWT_SECRET must be at least 32 bytes (256 bits)',
+      )
+      .refine((secret) => new Set(secret).size >= 10, 'JWT_SECRET looks weak: use random data'),
+    JWT_ACCESS_TTL_SECONDS: z.coerce.number().int().min(30).max(900).default(900),
+    REFRESH_TTL_DAYS: z.coerce.number().int().min(1).max(90).default(14),
+    INVITE_TTL_HOURS: z.coerce
+      .number()
+      .int()
+      .min(1)
+      .max(24 * 30)
+      .default(72),
+    LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(10),
+    LOGIN_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+    RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
+    CLIENT_DIST_DIR: z.string().optional(),
+    // E-mail: nodemailer over SMTP. `npm start` and `npm test` point these at the local fake SMTP server.
+    SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+    SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+    SMTP_SECURE: z
+      .enum(['true', 'false'])
+      .default('false')
+      .transform((value) => value === 'true'),
+    SMTP_USER: z.string().min(1).optional(),
+    SMTP_PASSWORD: z.string().min(1).optional(),
+    MAIL_FROM: z.string().min(3).default('Pondwright <no-reply@pondwright.example>'),
+    /** The fake SMTP server's HTTP API, read by the developer mailbox page; ignored in production. */
+    MAILBOX_URL: z.url().optional(),
+    OUTBOX_WORKER: z
+      .enum(['on', 'off'])
+      .default('on')
+      .transform((value) => value === 'on'),
+    OUTBOX_POLL_MS: z.coerce.number().int().min(50).max(60_000).default(1000),
+    // Payments: the stripe SDK. STRIPE_API_URL points it at the local fake; unset, it talks to the provider.
+    STRIPE_SECRET_KEY: z.string().min(8).default(LOCAL_FAKE_STRIPE_KEY),
+    STRIPE_WEBHOOK_SECRET: z.string().min(8).default(LOCAL_FAKE_WEBHOOK_SECRET),
+    STRIPE_API_URL: z.url().optional(),
+    LOG_LEVEL: z
+      .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
+      .default('info'),
+  })
+  .superRefine((env, context) => {
+    // Production talks to the real provider and a real mail server: the local fakes' settings are refused.
+    if (env.NODE_ENV !== 'production') return;
+    const refuse = (path: string, message: string) =>
+      context.addIssue({ code: 'custom', path: [path], message });
+    if (env.STRIPE_SECRET_KEY === LOCAL_FAKE_STRIPE_KEY)
+      refuse('STRIPE_SECRET_KEY', 'Set the provider’s secret key');
+    if (env.STRIPE_WEBHOOK_SECRET === LOCAL_FAKE_WEBHOOK_SECRET)
+      refuse('STRIPE_WEBHOOK_SECRET', 'Set the webhook signing secret from the provider');
+    if (env.STRIPE_API_URL)
+      refuse('STRIPE_API_URL', 'Leave unset in production (it points at the local fake)');
+    if (!env.PUBLIC_APP_URL)
+      refuse('PUBLIC_APP_URL', 'Set the address people reach the app at (quote links use it)');
+  });
 
 export type Env = z.infer<typeof envSchema>;
 

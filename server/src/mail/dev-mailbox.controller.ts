@@ -36,7 +36,10 @@ export class DevMailboxController {
       signal: AbortSignal.timeout(5000),
     }).catch(() => null);
     if (!response?.ok) {
-      throw new AppError('MAILBOX_UNAVAILABLE', 'The local fake mailbox is not answering; is it running?');
+      throw new AppError(
+        'MAILBOX_UNAVAILABLE',
+        'The local fake mailbox is not answering; is it running?',
+      );
     }
     return response;
   }

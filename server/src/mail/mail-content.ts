@@ -4,7 +4,8 @@ export type MailContent = { subject: string; text: string; html: string };
 const escapeHtml = (value: string): string =>
   value.replace(/[&<>"']/g, (char) => `&#${char.charCodeAt(0)};`);
 
-export type MailBlock = { kind: 'paragraph'; text: string } | { kind: 'button'; label: string; url: string };
+export type MailBlock =
+  { kind: 'paragraph'; text: string } | { kind: 'button'; label: string; url: string };
 
 /**
  * One plain layout for every e-mail: paragraphs and at most a few buttons, so the text and HTML bodies
@@ -12,7 +13,9 @@ export type MailBlock = { kind: 'paragraph'; text: string } | { kind: 'button'; 
  */
 export function composeMail(subject: string, blocks: MailBlock[], footer: string): MailContent {
   const text = [
-    ...blocks.map((block) => (block.kind === 'paragraph' ? block.text : `${block.label}: ${block.url}`)),
+    ...blocks.map((block) =>
+      block.kind === 'paragraph' ? block.text : `${block.label}: ${block.url}`,
+    ),
     '—',
     footer,
   ].join('\n\n');

@@ -1,4 +1,9 @@
-import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
+import {
+  Injectable,
+  Logger,
+  type OnApplicationBootstrap,
+  type OnModuleDestroy,
+} from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager } from 'typeorm';
@@ -177,7 +182,12 @@ export class OutboxService implements OnApplicationBootstrap, OnModuleDestroy {
        SET status = $2, last_error = $3, locked_until = NULL,
            next_attempt_at = now() + make_interval(secs => $4)
        WHERE id = $1`,
-      [message.id, giveUp ? 'failed' : 'pending', reason.slice(0, 2000), retryDelaySeconds(message.attempts)],
+      [
+        message.id,
+        giveUp ? 'failed' : 'pending',
+        reason.slice(0, 2000),
+        retryDelaySeconds(message.attempts),
+      ],
     );
   }
 }

@@ -50,7 +50,8 @@ export class PaymentsService {
       purpose: 'deposit',
       status: 'paid',
     });
-    if (paid) throw new AppError('DEPOSIT_ALREADY_PAID', 'The deposit for this quote is already paid.');
+    if (paid)
+      throw new AppError('DEPOSIT_ALREADY_PAID', 'The deposit for this quote is already paid.');
     const amountMinor = moneyToMinorUnits(acceptance.deposit);
     if (amountMinor <= 0) {
       throw new AppError('DEPOSIT_ALREADY_PAID', 'This quote asks for no deposit.');
@@ -71,19 +72,28 @@ export class PaymentsService {
         ],
         customer_email: checkout.customerEmail,
         client_reference_id: acceptance.estimateId,
-        metadata: { estimateId: acceptance.estimateId, acceptanceId: acceptance.id, purpose: 'deposit' },
+        metadata: {
+          estimateId: acceptance.estimateId,
+          acceptanceId: acceptance.id,
+          purpose: 'deposit',
+        },
         success_url: `${checkout.returnUrl}?payment=success`,
         cancel_url: `${checkout.returnUrl}?payment=cancelled`,
       });
     } catch (error) {
-      this.logger.error(`Checkout session failed: ${error instanceof Error ? error.message : error}`);
+      this.logger.error(
+        `Checkout session failed: ${error instanceof Error ? error.message : error}`,
+      );
       throw new AppError(
         'PAYMENT_PROVIDER_UNAVAILABLE',
         'We could not reach the payment service. Please try again in a minute.',
       );
     }
     if (!session.url) {
-      throw new AppError('PAYMENT_PROVIDER_UNAVAILABLE', 'The payment service gave no checkout page.');
+      throw new AppError(
+        'PAYMENT_PROVIDER_UNAVAILABLE',
+        'The payment service gave no checkout page.',
+      );
     }
     await this.dataSource.manager.insert(Payment, {
       companyId: acceptance.companyId,
@@ -105,13 +115,20 @@ export class PaymentsService {
    * checkout marks its payment paid, logs it on the estimate and queues both receipts, all in one
    * transaction with the event id.
    */
-  async handleWebhook(rawBody: Buffer | undefined, signature: string | undefined): Promise<WebhookOutcome> {
+  async handleWebhook(
+    rawBody: Buffer | undefined,
+    signature: string | undefined,
+  ): Promise<WebhookOutcome> {
     if (!rawBody || !signature) {
       throw new AppError('WEBHOOK_SIGNATURE_INVALID', 'Missing webhook body or signature.');
     }
     let event: Stripe.Event;
     try {
-      event = this.stripe.webhooks.constructEvent(rawBody, signature, this.config.stripe.webhookSecret);
+      event = this.stripe.webhooks.constructEvent(
+        rawBody,
+        signature,
+        this.config.stripe.webhookSecret,
+      );
     } catch {
       throw new AppError('WEBHOOK_SIGNATURE_INVALID', 'The webhook signature does not verify.');
     }
@@ -125,7 +142,11 @@ export class PaymentsService {
       if (event.type === 'checkout.session.completed') {
         const paymentId = await this.completeCheckout(manager, event.data.object);
         if (paymentId) {
-          await manager.update(PaymentEvent, { provider: PROVIDER, eventId: event.id }, { paymentId });
+          await manager.update(
+            PaymentEvent,
+            { provider: PROVIDER, eventId: event.id },
+            { paymentId },
+          );
         }
       }
       return { received: true, duplicate: false };
@@ -164,7 +185,9 @@ export class PaymentsService {
         detail: {
           checkoutSessionId: session.id,
           amountReceivedMinor: received,
-          reason: alreadyPaid ? 'a deposit was already paid' : 'amount differs from the deposit asked',
+          reason: alreadyPaid
+            ? 'a deposit was already paid'
+            : 'amount differs from the deposit asked',
         },
       });
       return payment.id;

@@ -95,7 +95,9 @@ export class PublicQuotesService {
       const options = version.computed.priced.options;
       const unknown = request.optionIds.filter((id) => !options.some((o) => o.id === id));
       if (unknown.length > 0) {
-        throw fieldErrors([{ field: 'optionIds', message: `Unknown option: ${unknown.join(', ')}` }]);
+        throw fieldErrors([
+          { field: 'optionIds', message: `Unknown option: ${unknown.join(', ')}` },
+        ]);
       }
       const totals = quoteSelectionTotals({
         baseTotal: version.computed.priced.totals.total,
@@ -265,7 +267,9 @@ export class PublicQuotesService {
 
   async logo(token: string): Promise<CompanyLogo> {
     const link = await this.usableLink(this.dataSource.manager, token);
-    const logo = await this.dataSource.manager.findOneBy(CompanyLogo, { companyId: link.companyId });
+    const logo = await this.dataSource.manager.findOneBy(CompanyLogo, {
+      companyId: link.companyId,
+    });
     if (!logo) throw new AppError('LOGO_NOT_FOUND', 'This company has no logo.');
     return logo;
   }
@@ -334,7 +338,10 @@ export class PublicQuotesService {
     // Re-read under the lock: staff may have revoked the link a moment ago.
     const fresh = await manager.findOneByOrFail(QuoteLink, { id: link.id });
     if (fresh.revokedAt) {
-      throw new AppError('QUOTE_LINK_REVOKED', 'This link was withdrawn a moment ago. Ask for the current quote.');
+      throw new AppError(
+        'QUOTE_LINK_REVOKED',
+        'This link was withdrawn a moment ago. Ask for the current quote.',
+      );
     }
     return estimate;
   }

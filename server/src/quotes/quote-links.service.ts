@@ -25,7 +25,13 @@ import { quoteSentMail } from './quote-mail';
 import { acceptanceView, loadQuoteRecords, staffPaymentView } from './quote-records';
 
 /** Statuses from which the latest version may be sent (again). */
-const SENDABLE: ReadonlyArray<EstimateStatus> = ['approved', 'sent', 'viewed', 'declined', 'expired'];
+const SENDABLE: ReadonlyArray<EstimateStatus> = [
+  'approved',
+  'sent',
+  'viewed',
+  'declined',
+  'expired',
+];
 
 /** Staff's side of the quote: send (and resend) a link for the latest version, list and revoke links. */
 @Injectable()
@@ -128,7 +134,11 @@ export class QuoteLinksService {
     await this.dataSource.transaction(async (manager) => {
       const estimate = await this.lockEstimate(manager, estimateId);
       const link = isUuid(linkId)
-        ? await manager.findOneBy(QuoteLink, { id: linkId, estimateId, companyId: estimate.companyId })
+        ? await manager.findOneBy(QuoteLink, {
+            id: linkId,
+            estimateId,
+            companyId: estimate.companyId,
+          })
         : null;
       if (!link) throw new AppError('NOT_FOUND', 'Quote link not found');
       if (link.revokedAt) return;

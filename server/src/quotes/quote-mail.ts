@@ -7,7 +7,8 @@ export function money(amount: string, currency: string): string {
   );
 }
 
-const FOOTER = 'Sent with Pondwright on behalf of your contractor. Reply to this e-mail to reach them.';
+const FOOTER =
+  'Sent with Pondwright on behalf of your contractor. Reply to this e-mail to reach them.';
 
 export function quoteSentMail(args: {
   companyName: string;
@@ -105,7 +106,10 @@ export function depositReceiptMail(args: {
           kind: 'paragraph',
           text: `Amount: ${paid}\nFor: ${args.title} (quote No. ${args.estimateNumber})\nPaid: ${when}\nReference: ${args.reference}`,
         },
-        { kind: 'paragraph', text: 'Keep this e-mail as your receipt. Your original quote link still shows the quote and its PDF.' },
+        {
+          kind: 'paragraph',
+          text: 'Keep this e-mail as your receipt. Your original quote link still shows the quote and its PDF.',
+        },
       ],
       FOOTER,
     );

@@ -22,7 +22,10 @@ export async function loadQuoteRecords(
   const [acceptance, decline, payments] = await Promise.all([
     manager.findOneBy(QuoteAcceptance, { estimateId }),
     manager.findOne(QuoteDecline, { where: { estimateId }, order: { declinedAt: 'DESC' } }),
-    manager.find(Payment, { where: { estimateId, purpose: 'deposit' }, order: { createdAt: 'DESC' } }),
+    manager.find(Payment, {
+      where: { estimateId, purpose: 'deposit' },
+      order: { createdAt: 'DESC' },
+    }),
   ]);
   // A paid deposit wins over later unpaid attempts (a homeowner may open checkout twice).
   const payment = payments.find((p) => p.status === 'paid') ?? payments[0] ?? null;

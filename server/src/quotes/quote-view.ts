@@ -65,7 +65,10 @@ export function buildQuoteView(source: QuoteViewSource): QuoteView {
     scope: content.scope,
     highlights: highlights(content, computed, system),
     included: included(computed),
-    drawings: { plan: content.input.basins.length > 0 ? planDrawing(content.input) : null, sections },
+    drawings: {
+      plan: content.input.basins.length > 0 ? planDrawing(content.input) : null,
+      sections,
+    },
     base: {
       priceBeforeTax: formatMoney(toDecimal(totals.total).minus(toDecimal(totals.tax))),
       discount: totals.discount,
@@ -104,7 +107,10 @@ function highlights(content: EstimateContent, computed: EstimateComputed, system
     });
     const deepestFt = Math.max(...takeoff.basins.map((basin) => basin.maxDepthFt));
     rows.push({ label: 'Deepest point', value: shown(deepestFt * 12, 'in', system) });
-    rows.push({ label: 'Water surface', value: shown(takeoff.water.surfaceAreaSqFt, 'sqFt', system) });
+    rows.push({
+      label: 'Water surface',
+      value: shown(takeoff.water.surfaceAreaSqFt, 'sqFt', system),
+    });
   }
   if (takeoff.water.volumeGallons > 0) {
     rows.push({ label: 'Water volume', value: shown(takeoff.water.volumeGallons, 'gal', system) });
@@ -126,7 +132,8 @@ function highlights(content: EstimateContent, computed: EstimateComputed, system
       value: `${shown(best.flowGph, 'gph', system)} at ${shown(best.headFt, 'headFt', system)}`,
     });
   }
-  if (takeoff.lighting) rows.push({ label: 'Lighting', value: shown(takeoff.lighting.totalWatts, 'watt', system) });
+  if (takeoff.lighting)
+    rows.push({ label: 'Lighting', value: shown(takeoff.lighting.totalWatts, 'watt', system) });
   rows.push({ label: 'Crew time', value: shown(takeoff.labor.crewDays, 'day', system) });
   return rows;
 }

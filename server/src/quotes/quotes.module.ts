@@ -25,7 +25,9 @@ export class QuotesModule implements OnModuleInit {
   /** The quote e-mail's PDF is rendered when the e-mail is sent, from the link it was queued with. */
   onModuleInit(): void {
     this.outbox.registerAttachmentBuilder('quote-pdf', async (attachment) => {
-      const link = await this.dataSource.manager.findOneByOrFail(QuoteLink, { id: attachment.linkId });
+      const link = await this.dataSource.manager.findOneByOrFail(QuoteLink, {
+        id: attachment.linkId,
+      });
       const pdf = await this.quotes.pdfForLink(link);
       return { filename: attachment.filename, content: pdf.bytes, contentType: 'application/pdf' };
     });

@@ -25,7 +25,10 @@ export class StaffQuotePdfService {
     private readonly quotes: PublicQuotesService,
   ) {}
 
-  async forEstimate(estimateId: string, actorId: string): Promise<{ filename: string; bytes: Buffer }> {
+  async forEstimate(
+    estimateId: string,
+    actorId: string,
+  ): Promise<{ filename: string; bytes: Buffer }> {
     const manager = this.dataSource.manager;
     const estimate = isUuid(estimateId)
       ? await manager.findOneBy(Estimate, { id: estimateId, companyId: this.tenant.companyId })

@@ -4,7 +4,11 @@ import { bearer, type TestApp } from './test-app';
 type Session = { accessToken: string };
 
 /** A customer inserted directly: quote tests are about quotes, not the customer screens. */
-export async function addCustomer(testApp: TestApp, companyId: string, name: string): Promise<string> {
+export async function addCustomer(
+  testApp: TestApp,
+  companyId: string,
+  name: string,
+): Promise<string> {
   const [row] = (await testApp.dataSource.query(
     `INSERT INTO customers (company_id, name, email) VALUES ($1, $2, $3) RETURNING id`,
     [companyId, name, 'homeowner@example.test'],

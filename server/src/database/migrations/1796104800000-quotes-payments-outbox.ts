@@ -87,7 +87,9 @@ export class QuotesPaymentsOutbox1796104800000 implements MigrationInterface {
     await queryRunner.query(
       `CREATE INDEX quote_acceptances_version_idx ON quote_acceptances (version_id)`,
     );
-    await queryRunner.query(`CREATE INDEX quote_acceptances_link_idx ON quote_acceptances (link_id)`);
+    await queryRunner.query(
+      `CREATE INDEX quote_acceptances_link_idx ON quote_acceptances (link_id)`,
+    );
 
     await queryRunner.query(`
       CREATE TABLE quote_declines (
@@ -104,8 +106,12 @@ export class QuotesPaymentsOutbox1796104800000 implements MigrationInterface {
     await queryRunner.query(
       `CREATE INDEX quote_declines_estimate_idx ON quote_declines (estimate_id, declined_at DESC)`,
     );
-    await queryRunner.query(`CREATE INDEX quote_declines_company_idx ON quote_declines (company_id)`);
-    await queryRunner.query(`CREATE INDEX quote_declines_version_idx ON quote_declines (version_id)`);
+    await queryRunner.query(
+      `CREATE INDEX quote_declines_company_idx ON quote_declines (company_id)`,
+    );
+    await queryRunner.query(
+      `CREATE INDEX quote_declines_version_idx ON quote_declines (version_id)`,
+    );
 
     // The homeowner's answers are evidence: never changed or removed (except with the estimate).
     await queryRunner.query(`
@@ -143,7 +149,9 @@ export class QuotesPaymentsOutbox1796104800000 implements MigrationInterface {
     await queryRunner.query(
       `CREATE UNIQUE INDEX payments_one_paid_deposit_key ON payments (estimate_id, purpose) WHERE status = 'paid'`,
     );
-    await queryRunner.query(`CREATE INDEX payments_estimate_idx ON payments (estimate_id, created_at DESC)`);
+    await queryRunner.query(
+      `CREATE INDEX payments_estimate_idx ON payments (estimate_id, created_at DESC)`,
+    );
     await queryRunner.query(`CREATE INDEX payments_company_idx ON payments (company_id)`);
     await queryRunner.query(`CREATE INDEX payments_acceptance_idx ON payments (acceptance_id)`);
 
@@ -156,7 +164,9 @@ export class QuotesPaymentsOutbox1796104800000 implements MigrationInterface {
         received_at timestamptz NOT NULL DEFAULT now(),
         PRIMARY KEY (provider, event_id)
       )`);
-    await queryRunner.query(`CREATE INDEX payment_events_payment_idx ON payment_events (payment_id)`);
+    await queryRunner.query(
+      `CREATE INDEX payment_events_payment_idx ON payment_events (payment_id)`,
+    );
 
     await queryRunner.query(`
       CREATE TABLE company_logos (

@@ -1,4 +1,11 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+} from 'typeorm';
 import type { CompanyOwned } from '../../common/tenancy/company-owned';
 import { EstimateVersion } from '../../estimates/entities/estimate-version.entity';
 import { User } from '../../users/entities/user.entity';
