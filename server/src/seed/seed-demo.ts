@@ -6,6 +6,7 @@ import { Site } from '../customers/entities/site.entity';
 import { addStarterPriceBook } from '../price-book/starter-price-book';
 import { User } from '../users/entities/user.entity';
 import { DEMO_COMPANY_NAME, DEMO_USERS } from './demo-data';
+import { addDemoEstimates } from './seed-demo-estimates';
 
 /**
  * Adds the demo company, its people and its starter price book when they are missing. Idempotent: rows
@@ -41,6 +42,9 @@ export async function seedDemo(dataSource: DataSource): Promise<{ created: strin
     if (await addStarterPriceBook(manager, companyId, demoOwner.id)) created.push('price book');
     const customers = await addDemoCustomers(manager, companyId);
     if (customers) created.push(`${customers} customers`);
+    const estimator = await manager.findOneByOrFail(User, { email: DEMO_USERS[1]!.email });
+    const estimates = await addDemoEstimates(manager, companyId, estimator.id);
+    if (estimates) created.push(`${estimates} estimates`);
   });
   return { created };
 }
