@@ -1,6 +1,6 @@
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
-import { defineConfig } from 'vite';
+import { defineConfig, type Connect, type Plugin } from 'vite';
 
 const fromHere = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 
@@ -23,10 +23,37 @@ export const aliases = [
   { find: /^@pondwright\/shared$/, replacement: fromHere('../shared/src/index.ts') },
 ];
 
+/** Source files of the shared package, which the aliases above bundle from source. */
+const SHARED_SOURCE = /[\\/]shared[\\/]src[\\/].*\.ts$/;
+
 const apiPort = process.env.PORT ?? '3000';
 
+/** `/q/<token>` is the homeowner's quote page: quote.html, not the staff app's index.html. */
+export const QUOTE_PAGE_PATH = /^\/q\/[^/?#]+\/?(?:[?#]|$)/;
+
+const serveQuotePage: Connect.NextHandleFunction = (req, _res, next) => {
+  if (req.url && (req.method === 'GET' || req.method === 'HEAD') && QUOTE_PAGE_PATH.test(req.url)) {
+    const query = req.url.indexOf('?');
+    req.url = `/quote.html${query >= 0 ? req.url.slice(query) : ''}`;
+  }
+  next();
+};
+
+/** The dev and preview servers' stand-in for the server's `/q/*` route (see server/src/quote-page-host). */
+function quotePageRewrite(): Plugin {
+  return {
+    name: 'pondwright:quote-page-rewrite',
+    configureServer: (server) => {
+      server.middlewares.use(serveQuotePage);
+    },
+    configurePreviewServer: (server) => {
+      server.middlewares.use(serveQuotePage);
+    },
+  };
+}
+
 export default defineConfig({
-  plugins: [react()],
+  plugins: [react(), quotePageRewrite()],
   resolve: { alias: aliases },
   server: {
     port: 5173,
@@ -43,5 +70,20 @@ export default defineConfig({
     outDir: fromHere('dist'),
     emptyOutDir: true,
     sourcemap: true,
+    // scripts/quote-bundle-size.mjs reads which files each page loads from the manifest.
+    manifest: true,
+    rolldownOptions: {
+      // The shared package is pure (eslint forbids I/O and frameworks there), so a module of it none of
+      // whose exports is used can go: the quote page imports `quoteSelectionTotals` from the package's
+      // index without also loading zod and every schema behind it. Other modules keep Rolldown's default.
+      treeshake: {
+        moduleSideEffects: (id) => (SHARED_SOURCE.test(id) ? false : undefined),
+      },
+      // Two pages: the staff app, and the homeowner's small public quote page (`/q/<token>`).
+      input: {
+        main: fromHere('index.html'),
+        quote: fromHere('quote.html'),
+      },
+    },
   },
 });

@@ -5,6 +5,7 @@ import {
   IconBuildingStore,
   IconFileInvoice,
   IconHome2,
+  IconMail,
   IconReceipt2,
   IconRulerMeasure,
   IconUsersGroup,
@@ -33,8 +34,20 @@ const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
   { label: 'Company', to: paths.company.getHref(), icon: IconBuildingStore, area: 'company' },
 ];
 
-export function navItemsFor(role: Role): AppNavItem[] {
-  return NAV_ITEMS.filter((item) => canAccess(role, item.area)).map(
-    ({ area: _area, ...item }) => item,
-  );
+/** Shown only where the server has a developer mailbox (never in production, where it answers 404). */
+const MAILBOX_ITEM: AppNavItem & { area: Area } = {
+  label: 'Mailbox (dev)',
+  to: paths.devMailbox.getHref(),
+  icon: IconMail,
+  area: 'devMailbox',
+};
+
+type NavOptions = {
+  /** The server answered `GET /api/dev/mailbox` with 200. */
+  mailbox?: boolean;
+};
+
+export function navItemsFor(role: Role, { mailbox = false }: NavOptions = {}): AppNavItem[] {
+  const items = mailbox ? [...NAV_ITEMS, MAILBOX_ITEM] : NAV_ITEMS;
+  return items.filter((item) => canAccess(role, item.area)).map(({ area: _area, ...item }) => item);
 }

@@ -97,6 +97,13 @@ export function createAppRoutes(): RouteObject[] {
               }),
             },
             {
+              // A developer tool: the e-mails the local fake SMTP server caught. 404 in production.
+              path: paths.devMailbox.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/dev-mailbox')).DevMailboxRoute,
+              }),
+            },
+            {
               path: paths.approvals.path,
               lazy: async () => ({
                 Component: (await import('./routes/app/approvals')).ApprovalsRoute,

@@ -23,6 +23,7 @@ export const paths = {
     path: '/estimates/:id',
     getHref: (id: string) => `/estimates/${encodeURIComponent(id)}`,
   },
+  devMailbox: { path: '/dev/mailbox', getHref: () => '/dev/mailbox' },
   signIn: {
     path: '/sign-in',
     getHref: (next?: string | null) =>

@@ -94,6 +94,7 @@ export function refreshAccessToken(): Promise<string | null> {
 
 export type RequestOptions = {
   method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+  /** Sent as JSON, or as multipart when it is a FormData. */
   body?: unknown;
   signal?: AbortSignal;
   /** What the caller wants back; JSON unless a file is being downloaded. */
@@ -107,14 +108,16 @@ function buildInit({
   accept = 'application/json',
 }: RequestOptions): RequestInit {
   const headers: Record<string, string> = { Accept: accept };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // A file upload goes as multipart: the browser writes that Content-Type, with its boundary.
+  const multipart = body instanceof FormData;
+  if (body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   return {
     method,
     headers,
     credentials: 'include',
     signal,
-    body: body === undefined ? undefined : JSON.stringify(body),
+    body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
   };
 }
 

@@ -7,13 +7,16 @@ export class ApiError extends Error {
   readonly statusCode: number;
   readonly error: string;
   readonly details: FieldError[];
+  /** The server's stable code when it gives one, e.g. `ESTIMATE_LOCKED`. */
+  readonly code: string | null;
 
-  constructor(body: ApiErrorBody) {
+  constructor(body: ApiErrorBody & { code?: unknown }) {
     super(body.message);
     this.name = 'ApiError';
     this.statusCode = body.statusCode;
     this.error = body.error;
     this.details = body.details ?? [];
+    this.code = typeof body.code === 'string' ? body.code : null;
   }
 }
 

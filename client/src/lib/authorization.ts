@@ -17,6 +17,8 @@ export const AREA_ROLES = {
   /** The approval queue and the pipeline dashboard on Home. */
   approvals: ['owner'],
   dashboard: ['owner'],
+  /** The developer mailbox; the server also hides it (404) in production. */
+  devMailbox: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Area = keyof typeof AREA_ROLES;

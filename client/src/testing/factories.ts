@@ -71,6 +71,7 @@ export function buildCompany(overrides: Partial<CompanyProfile> = {}): CompanyPr
     id: 'company-1',
     name: 'Example Ponds Co',
     unitSystem: 'us',
+    hasLogo: false,
     ...overrides,
   };
 }

@@ -1,4 +1,10 @@
-import { formatMoney, percentToFraction, PricingDecimal, roundMoney, toDecimal } from '../pricing/money';
+import {
+  formatMoney,
+  percentToFraction,
+  PricingDecimal,
+  roundMoney,
+  toDecimal,
+} from '../pricing/money';
 import type { QuoteOption } from './quote-schemas';
 
 export type QuoteSelectionTotals = {
@@ -26,7 +32,10 @@ export function quoteSelectionTotals(args: {
   chosenIds: ReadonlyArray<string>;
 }): QuoteSelectionTotals {
   const chosen = args.options.filter((option) => args.chosenIds.includes(option.id));
-  const optionsPrice = chosen.reduce((sum, o) => sum.plus(toDecimal(o.price)), new PricingDecimal(0));
+  const optionsPrice = chosen.reduce(
+    (sum, o) => sum.plus(toDecimal(o.price)),
+    new PricingDecimal(0),
+  );
   const optionsTax = chosen.reduce((sum, o) => sum.plus(toDecimal(o.tax)), new PricingDecimal(0));
   const total = toDecimal(args.baseTotal).plus(optionsPrice).plus(optionsTax);
   const deposit = roundMoney(total.times(percentToFraction(args.depositPct)));

@@ -7,7 +7,10 @@ import {
 import { useState } from 'react';
 import { describe, expect, it } from 'vitest';
 import { renderWithProviders, screen } from '@/testing/render';
+import { crossSection, planDrawing } from '@pondwright/shared/drawings';
 import { CrossSection } from './cross-section';
+import { CrossSectionSvg } from './cross-section-svg';
+import { PlanSvg } from './plan-svg';
 import { PlanView } from './plan-view';
 import { PumpChart } from './pump-chart';
 import { TakeoffDrawings } from './takeoff-drawings';
@@ -51,6 +54,27 @@ describe('CrossSection', () => {
     for (const part of ['liner', 'underlayment', 'gravel', 'rock', 'water-line']) {
       expect(container.querySelector(`[data-part="${part}"]`)).not.toBeNull();
     }
+  });
+});
+
+describe('PlanSvg and CrossSectionSvg', () => {
+  it('draw from drawing data alone, as the quote page gets it from the server', () => {
+    // Through JSON, as the data travels: plain objects, no functions or class instances.
+    const plan = JSON.parse(JSON.stringify(planDrawing(pond))) as ReturnType<typeof planDrawing>;
+    const section = JSON.parse(JSON.stringify(crossSection(pond, takeoffOf()))) as NonNullable<
+      ReturnType<typeof crossSection>
+    >;
+    const { container } = renderWithProviders(
+      <>
+        <PlanSvg plan={plan} />
+        <CrossSectionSvg section={section} />
+      </>,
+    );
+    expect(screen.getByRole('img', { name: /plan view/i })).toBeInTheDocument();
+    expect(screen.getByRole('img', { name: /cross-section of basin 1/i })).toBeInTheDocument();
+    expect(container.querySelectorAll('[data-part="outline"]')).toHaveLength(1);
+    expect(container.querySelector('[data-part="liner"]')).not.toBeNull();
+    expect(screen.getByText('max 2 ft')).toBeInTheDocument();
   });
 });
 

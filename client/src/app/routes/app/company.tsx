@@ -1,4 +1,4 @@
-import { Paper } from '@mantine/core';
+import { Paper, Stack } from '@mantine/core';
 import { useQueryClient } from '@tanstack/react-query';
 import { ErrorPanel } from '@/components/error-panel';
 import { PageHeader } from '@/components/page-header';
@@ -7,6 +7,7 @@ import { currentUserQueryKey } from '@/features/auth/api/get-current-user';
 import { RequireRole } from '@/features/auth/components/require-role';
 import { useCompany } from '@/features/company/api/get-company';
 import { CompanyForm } from '@/features/company/components/company-form';
+import { CompanyLogo } from '@/features/company/components/company-logo';
 
 function CompanyPage() {
   const company = useCompany();
@@ -16,7 +17,7 @@ function CompanyPage() {
     <>
       <PageHeader
         title="Company"
-        description="Your company’s name, and the units new takeoffs start in."
+        description="Your company’s name and logo, and the units new takeoffs start in."
       />
       {company.isPending ? (
         <PageLoader label="Loading the company…" />
@@ -27,13 +28,18 @@ function CompanyPage() {
           onRetry={() => void company.refetch()}
         />
       ) : (
-        <Paper p="lg" maw={560}>
-          <CompanyForm
-            company={company.data}
-            // The header shows the company name from the signed-in user.
-            onSaved={() => queryClient.invalidateQueries({ queryKey: currentUserQueryKey })}
-          />
-        </Paper>
+        <Stack gap="lg" maw={560}>
+          <Paper p="lg">
+            <CompanyForm
+              company={company.data}
+              // The header shows the company name from the signed-in user.
+              onSaved={() => queryClient.invalidateQueries({ queryKey: currentUserQueryKey })}
+            />
+          </Paper>
+          <Paper p="lg">
+            <CompanyLogo company={company.data} />
+          </Paper>
+        </Stack>
       )}
     </>
   );

@@ -1,4 +1,4 @@
-import { Anchor, Group, Paper, Stack, Tabs, Text, Title } from '@mantine/core';
+import { Anchor, Fieldset, Group, Paper, Stack, Tabs, Text, Title } from '@mantine/core';
 import type { EstimateView } from '@pondwright/shared';
 import type { TakeoffInput } from '@pondwright/shared/engine';
 import { IconArrowLeft } from '@tabler/icons-react';
@@ -11,8 +11,10 @@ import { paths } from '@/config/paths';
 import { RequireRole } from '@/features/auth/components/require-role';
 import { useEstimate } from '@/features/estimates/api/get-estimate';
 import { EstimateActions } from '@/features/estimates/components/estimate-actions';
+import { EstimateEditNotes } from '@/features/estimates/components/estimate-edit-notes';
+import { EstimateHeaderStatus } from '@/features/estimates/components/estimate-header-status';
 import { EstimatePanel } from '@/features/estimates/components/estimate-panel';
-import { EstimateStatusBadge } from '@/features/estimates/components/estimate-status-badge';
+import { EstimateQuotePanel } from '@/features/estimates/components/quote-panel';
 import { EstimateTimeline } from '@/features/estimates/components/estimate-timeline';
 import { EstimateVersions } from '@/features/estimates/components/estimate-versions';
 import { useEstimateEditor } from '@/features/estimates/hooks/use-estimate-editor';
@@ -34,7 +36,7 @@ function EstimateBuilder({ estimate }: { estimate: EstimateView }) {
             <Title order={1} fz="h2">
               #{estimate.number} {estimate.title}
             </Title>
-            <EstimateStatusBadge status={estimate.status} />
+            <EstimateHeaderStatus estimate={estimate} />
           </Group>
           <Text c="dimmed" size="sm">
             {estimate.customerName} · revision {editor.revision}, saved by{' '}
@@ -43,6 +45,8 @@ function EstimateBuilder({ estimate }: { estimate: EstimateView }) {
         </Stack>
         <EstimateActions editor={editor} />
       </Group>
+      <EstimateEditNotes estimate={estimate} />
+      <EstimateQuotePanel estimate={estimate} />
       <Tabs defaultValue="estimate" keepMounted>
         <Tabs.List mb="md">
           <Tabs.Tab value="estimate">Estimate</Tabs.Tab>
@@ -54,12 +58,17 @@ function EstimateBuilder({ estimate }: { estimate: EstimateView }) {
           <EstimatePanel estimate={estimate} editor={editor} />
         </Tabs.Panel>
         <Tabs.Panel value="takeoff">
-          <TakeoffWorkspace
-            key={editor.generation}
-            initialValues={estimate.draft.content.input as TakeoffInput}
-            renderActions={(input) => <ReportInput input={input} onInput={editor.setInput} />}
-            renderDrawings={(input, takeoff) => <TakeoffDrawings input={input} takeoff={takeoff} />}
-          />
+          {/* Locked once accepted: the disabled fieldset disables the takeoff's inputs too. */}
+          <Fieldset variant="unstyled" disabled={editor.locked} p={0} m={0} miw={0}>
+            <TakeoffWorkspace
+              key={editor.generation}
+              initialValues={estimate.draft.content.input as TakeoffInput}
+              renderActions={(input) => <ReportInput input={input} onInput={editor.setInput} />}
+              renderDrawings={(input, takeoff) => (
+                <TakeoffDrawings input={input} takeoff={takeoff} />
+              )}
+            />
+          </Fieldset>
         </Tabs.Panel>
         <Tabs.Panel value="versions">
           <Paper p="md">

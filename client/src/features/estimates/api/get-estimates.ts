@@ -8,6 +8,8 @@ export const estimateKeys = {
   detail: (id: string) => [...estimateKeys.all, 'detail', id] as const,
   comparison: (id: string, a: number, b: number) =>
     [...estimateKeys.all, 'detail', id, 'compare', a, b] as const,
+  /** Under the estimate's detail key, so refreshing the estimate refreshes its quote too. */
+  quote: (id: string) => [...estimateKeys.all, 'detail', id, 'quote'] as const,
 };
 
 export type EstimateListParams = {

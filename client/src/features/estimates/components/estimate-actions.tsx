@@ -12,7 +12,7 @@ export function EstimateActions({ editor }: { editor: EstimateEditor }) {
   return (
     <>
       <Group gap="sm">
-        {editor.dirty && (
+        {editor.dirty && !editor.locked && (
           <Badge color="clay" variant="light" tt="none">
             Unsaved changes
           </Badge>
@@ -20,6 +20,8 @@ export function EstimateActions({ editor }: { editor: EstimateEditor }) {
         <Button
           leftSection={<IconDeviceFloppy size={16} />}
           loading={editor.saving}
+          disabled={editor.locked}
+          title={editor.locked ? 'Accepted quotes are locked' : undefined}
           onClick={editor.saveDraft}
         >
           Save draft
@@ -27,8 +29,14 @@ export function EstimateActions({ editor }: { editor: EstimateEditor }) {
         <Button
           variant="light"
           leftSection={<IconLock size={16} />}
-          disabled={editor.dirty}
-          title={editor.dirty ? 'Save the draft before finalising it' : undefined}
+          disabled={editor.dirty || editor.locked}
+          title={
+            editor.locked
+              ? 'Accepted quotes are locked'
+              : editor.dirty
+                ? 'Save the draft before finalising it'
+                : undefined
+          }
           onClick={() => setConfirming(true)}
         >
           Finalise

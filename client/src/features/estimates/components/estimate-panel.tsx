@@ -1,4 +1,14 @@
-import { Alert, Grid, List, Paper, Stack, Textarea, TextInput, Title } from '@mantine/core';
+import {
+  Alert,
+  Fieldset,
+  Grid,
+  List,
+  Paper,
+  Stack,
+  Textarea,
+  TextInput,
+  Title,
+} from '@mantine/core';
 import type { EstimateView } from '@pondwright/shared';
 import type { EstimateEditor } from '../hooks/use-estimate-editor';
 import { ManualLinesEditor } from './manual-lines-editor';
@@ -36,62 +46,67 @@ export function EstimatePanel({ estimate, editor }: EstimatePanelProps) {
           cautions={estimate.draft.computed.takeoff.cautions}
         />
       </Paper>
-      <Paper p="md" component="section" aria-labelledby="estimate-manual-title">
-        <Title order={2} fz="h4" id="estimate-manual-title" mb="sm">
-          Manual lines
-        </Title>
-        <ManualLinesEditor
-          lines={content.manualLines}
-          errors={fieldErrors}
-          onChange={(manualLines) => setContent({ ...content, manualLines })}
-        />
-      </Paper>
-      <Paper p="md" component="section" aria-labelledby="estimate-terms-title">
-        <Title order={2} fz="h4" id="estimate-terms-title" mb="sm">
-          Terms
-        </Title>
-        <Grid>
-          <Grid.Col span={{ base: 12, sm: 8 }}>
-            <TextInput
-              label="Title"
-              value={content.title}
-              error={errorFor('title')}
-              onChange={(event) => setContent({ ...content, title: event.currentTarget.value })}
+      {/* An accepted estimate is locked: a disabled fieldset disables every control inside it. */}
+      <Fieldset variant="unstyled" disabled={editor.locked} p={0} m={0} miw={0}>
+        <Stack gap="md">
+          <Paper p="md" component="section" aria-labelledby="estimate-manual-title">
+            <Title order={2} fz="h4" id="estimate-manual-title" mb="sm">
+              Manual lines
+            </Title>
+            <ManualLinesEditor
+              lines={content.manualLines}
+              errors={fieldErrors}
+              onChange={(manualLines) => setContent({ ...content, manualLines })}
             />
-          </Grid.Col>
-          <Grid.Col span={{ base: 12, sm: 4 }}>
-            <TextInput
-              label="Discount %"
-              inputMode="decimal"
-              value={content.discountPct}
-              error={errorFor('discountPct')}
-              onChange={(event) =>
-                setContent({ ...content, discountPct: event.currentTarget.value })
-              }
-            />
-          </Grid.Col>
-          <Grid.Col span={12}>
-            <Textarea
-              label="Scope of work"
-              resize="vertical"
-              rows={3}
-              value={content.scope}
-              error={errorFor('scope')}
-              onChange={(event) => setContent({ ...content, scope: event.currentTarget.value })}
-            />
-          </Grid.Col>
-          <Grid.Col span={12}>
-            <Textarea
-              label="Notes"
-              resize="vertical"
-              rows={2}
-              value={content.notes}
-              error={errorFor('notes')}
-              onChange={(event) => setContent({ ...content, notes: event.currentTarget.value })}
-            />
-          </Grid.Col>
-        </Grid>
-      </Paper>
+          </Paper>
+          <Paper p="md" component="section" aria-labelledby="estimate-terms-title">
+            <Title order={2} fz="h4" id="estimate-terms-title" mb="sm">
+              Terms
+            </Title>
+            <Grid>
+              <Grid.Col span={{ base: 12, sm: 8 }}>
+                <TextInput
+                  label="Title"
+                  value={content.title}
+                  error={errorFor('title')}
+                  onChange={(event) => setContent({ ...content, title: event.currentTarget.value })}
+                />
+              </Grid.Col>
+              <Grid.Col span={{ base: 12, sm: 4 }}>
+                <TextInput
+                  label="Discount %"
+                  inputMode="decimal"
+                  value={content.discountPct}
+                  error={errorFor('discountPct')}
+                  onChange={(event) =>
+                    setContent({ ...content, discountPct: event.currentTarget.value })
+                  }
+                />
+              </Grid.Col>
+              <Grid.Col span={12}>
+                <Textarea
+                  label="Scope of work"
+                  resize="vertical"
+                  rows={3}
+                  value={content.scope}
+                  error={errorFor('scope')}
+                  onChange={(event) => setContent({ ...content, scope: event.currentTarget.value })}
+                />
+              </Grid.Col>
+              <Grid.Col span={12}>
+                <Textarea
+                  label="Notes"
+                  resize="vertical"
+                  rows={2}
+                  value={content.notes}
+                  error={errorFor('notes')}
+                  onChange={(event) => setContent({ ...content, notes: event.currentTarget.value })}
+                />
+              </Grid.Col>
+            </Grid>
+          </Paper>
+        </Stack>
+      </Fieldset>
     </Stack>
   );
 }

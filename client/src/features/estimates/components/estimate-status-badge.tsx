@@ -1,4 +1,4 @@
-import { Badge } from '@mantine/core';
+import { Badge, Group } from '@mantine/core';
 import type { EstimateStatus } from '@pondwright/shared';
 
 export const ESTIMATE_STATUS_LABELS: Record<EstimateStatus, string> = {
@@ -27,11 +27,26 @@ const STATUS_COLORS: Record<
   expired: { color: 'stone', variant: 'outline' },
 };
 
-export function EstimateStatusBadge({ status }: { status: EstimateStatus }) {
+type EstimateStatusBadgeProps = {
+  status: EstimateStatus;
+  /** Shows "Deposit paid" beside "Accepted" once the homeowner's deposit is in. */
+  depositPaid?: boolean;
+};
+
+export function EstimateStatusBadge({ status, depositPaid = false }: EstimateStatusBadgeProps) {
   const { color, variant } = STATUS_COLORS[status];
-  return (
+  const badge = (
     <Badge color={color} variant={variant} tt="none">
       {ESTIMATE_STATUS_LABELS[status]}
     </Badge>
+  );
+  if (status !== 'accepted' || !depositPaid) return badge;
+  return (
+    <Group gap={6} wrap="nowrap">
+      {badge}
+      <Badge color="green" variant="light" tt="none">
+        Deposit paid
+      </Badge>
+    </Group>
   );
 }

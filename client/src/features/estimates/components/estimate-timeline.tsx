@@ -7,6 +7,16 @@ const ACTION_LABELS: Record<string, string> = {
   finalised: 'Finalised a version',
   approved: 'Approved',
   sent_back: 'Sent back for changes',
+  // The server writes these with hyphens.
+  'draft-saved': 'Saved the draft',
+  'sent-back': 'Sent back for changes',
+  'quote-sent': 'Sent the quote',
+  'quote-viewed': 'Quote opened',
+  'quote-link-revoked': 'Revoked a quote link',
+  'quote-accepted': 'Quote accepted',
+  'quote-declined': 'Quote declined',
+  'deposit-paid': 'Deposit paid',
+  'deposit-needs-review': 'Deposit needs a look',
 };
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
@@ -25,7 +35,7 @@ export function EstimateTimeline({ events }: { events: EstimateEventView[] }) {
       {events.map((event) => (
         <Timeline.Item
           key={event.id}
-          title={ACTION_LABELS[event.action] ?? event.action.replaceAll('_', ' ')}
+          title={ACTION_LABELS[event.action] ?? event.action.replace(/[_-]/g, ' ')}
         >
           <Text size="sm" c="dimmed">
             {event.actorName} · {when.format(new Date(event.createdAt))}

@@ -2,15 +2,22 @@ import type { EstimateContent, EstimateView } from '@pondwright/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import { isApiError, type FieldError } from '@/lib/api-error';
-import { notifyApiError, notifySuccess } from '@/lib/notify';
+import { notifyApiError, notifyError, notifySuccess } from '@/lib/notify';
 import { useFinaliseEstimate } from '../api/finalise-estimate';
 import { getEstimateQueryOptions } from '../api/get-estimate';
+import { estimateKeys } from '../api/get-estimates';
 import { useSaveEstimateDraft } from '../api/save-estimate-draft';
 
 export type EditableContent = Omit<EstimateContent, 'input'>;
 
 const editable = ({ input: _input, ...content }: EstimateContent): EditableContent => content;
 const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
+
+/** The server refuses any change to an accepted estimate (409 ESTIMATE_LOCKED). */
+export const isLocked = (estimate: Pick<EstimateView, 'status'>) => estimate.status === 'accepted';
+/** A link is out with the homeowner; saving the draft withdraws it (the server revokes it). */
+export const hasLinkOut = (estimate: Pick<EstimateView, 'status'>) =>
+  estimate.status === 'sent' || estimate.status === 'viewed';
 
 /**
  * The estimator's unsaved edits to one draft: the panel's content, the takeoff input as the workspace
@@ -43,7 +50,19 @@ export function useEstimateEditor(estimate: EstimateView) {
     setFieldErrors([]);
   };
 
+  const locked = isLocked(estimate);
+
+  /** The homeowner accepted while this page was open: say so and show the locked estimate. */
+  const handleLocked = (error: unknown): boolean => {
+    if (!isApiError(error, 409) || error.code !== 'ESTIMATE_LOCKED') return false;
+    notifyError(error.message, 'This estimate is locked');
+    void queryClient.invalidateQueries({ queryKey: estimateKeys.detail(estimate.id) });
+    return true;
+  };
+
   const saveDraft = () => {
+    if (locked) return;
+    const withdrawsLink = hasLinkOut(estimate);
     setFieldErrors([]);
     save.mutate(
       {
@@ -55,9 +74,19 @@ export function useEstimateEditor(estimate: EstimateView) {
         onSuccess: (saved) => {
           adopt(saved);
           setInputBaseline(input);
-          notifySuccess(`Revision ${saved.draft.revision} saved.`, 'Draft saved');
+          notifySuccess(
+            withdrawsLink
+              ? `Revision ${saved.draft.revision} saved. The link sent to the homeowner no longer works; send the quote again when the new version is ready.`
+              : `Revision ${saved.draft.revision} saved.`,
+            'Draft saved',
+          );
+          // The server revoked the homeowner's link on this save.
+          if (withdrawsLink) {
+            void queryClient.invalidateQueries({ queryKey: estimateKeys.quote(estimate.id) });
+          }
         },
         onError: (error) => {
+          if (handleLocked(error)) return;
           if (isApiError(error, 409)) {
             setConflict({ message: error.message, details: error.details });
             return;
@@ -93,6 +122,10 @@ export function useEstimateEditor(estimate: EstimateView) {
           onDone();
         },
         onError: (error) => {
+          if (handleLocked(error)) {
+            onDone();
+            return;
+          }
           if (isApiError(error, 409) && error.details.length > 0) {
             setConflict({ message: error.message, details: error.details });
           }
@@ -103,6 +136,8 @@ export function useEstimateEditor(estimate: EstimateView) {
 
   const inputDirty = inputBaseline !== null && !same(input, inputBaseline);
   return {
+    /** Accepted: nothing may change, and the controls say so. */
+    locked,
     content,
     setContent,
     revision,

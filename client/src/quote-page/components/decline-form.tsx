@@ -1,0 +1,107 @@
+import { Alert, Button, Group, Stack, Text, Textarea, Title } from '@mantine/core';
+import type { QuoteView } from '@pondwright/shared';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { useDeclineQuote, useRefreshQuote } from '../api/quote-queries';
+import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
+
+/** "Decline" opens an optional reason; declining can't be undone here, so it takes a second click. */
+export function DeclineForm({
+  view,
+  token,
+  onDeclined,
+}: {
+  view: QuoteView;
+  token: string;
+  onDeclined: () => void;
+}) {
+  const decline = useDeclineQuote(token);
+  const refresh = useRefreshQuote(token);
+  const [open, setOpen] = useState(false);
+  const [reason, setReason] = useState('');
+  const [reasonError, setReasonError] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const reasonInput = useRef<HTMLTextAreaElement>(null);
+  const opener = useRef<HTMLButtonElement>(null);
+
+  useEffect(() => {
+    if (open) reasonInput.current?.focus();
+  }, [open]);
+
+  const close = () => {
+    setOpen(false);
+    setError(null);
+    setReasonError(null);
+    requestAnimationFrame(() => opener.current?.focus());
+  };
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setError(null);
+    setReasonError(null);
+    const text = reason.trim();
+    decline.mutate(text ? { reason: text } : {}, {
+      onSuccess: onDeclined,
+      onError: (failure) => {
+        const details = isQuoteRequestError(failure) ? failure.details : [];
+        const onReason = details.find((d) => d.field === 'reason');
+        if (onReason) {
+          setReasonError(onReason.message);
+          reasonInput.current?.focus();
+          return;
+        }
+        setError(details[0]?.message ?? quoteErrorMessage(failure));
+        if (isQuoteRequestError(failure) && failure.code === 'QUOTE_ALREADY_ANSWERED') {
+          void refresh();
+        }
+      },
+    });
+  };
+
+  return (
+    <Stack gap="xs">
+      <Title order={3} fz="h5">
+        Not going ahead?
+      </Title>
+      {open ? (
+        <form onSubmit={submit} noValidate aria-label="Decline this quote">
+          <Stack gap="sm">
+            <Textarea
+              ref={reasonInput}
+              label="Would you like to say why? (optional)"
+              description={`Your note goes to ${view.company.name}. It helps them, but you don’t have to give a reason.`}
+              rows={4}
+              maxLength={2000}
+              value={reason}
+              onChange={(event) => setReason(event.currentTarget.value)}
+              error={reasonError}
+            />
+            {error && (
+              <Alert color="red" role="alert" title="We couldn’t record that">
+                {error}
+              </Alert>
+            )}
+            <Group gap="sm">
+              <Button type="submit" color="red" variant="light" loading={decline.isPending}>
+                Decline quote
+              </Button>
+              <Button variant="subtle" color="stone" onClick={close} disabled={decline.isPending}>
+                Cancel
+              </Button>
+            </Group>
+          </Stack>
+        </form>
+      ) : (
+        <>
+          <Text fz="sm" c="dimmed">
+            Let {view.company.name} know. You can add a note if you like.
+          </Text>
+          <div>
+            <Button ref={opener} variant="default" onClick={() => setOpen(true)}>
+              Decline
+            </Button>
+          </div>
+        </>
+      )}
+    </Stack>
+  );
+}

@@ -1,0 +1,126 @@
+import { Alert, Button, Loader, Stack, Text } from '@mantine/core';
+import type { QuoteView } from '@pondwright/shared';
+import { useState } from 'react';
+import { useRefreshQuote, useStartCheckout } from '../api/quote-queries';
+import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
+import type { PaymentReturn } from '../lib/location';
+import { browser } from '../lib/browser';
+import { formatDay, formatMoney } from '../lib/format';
+
+type PaymentPanelProps = {
+  view: QuoteView;
+  token: string;
+  paymentReturn: PaymentReturn;
+  /** Back from the provider with `?payment=success`: the page checks every few seconds. */
+  confirming: boolean;
+  /** Checking ran out of time without word of the payment. */
+  waitedOut: boolean;
+  onCheckAgain: () => void;
+};
+
+/** The deposit after acceptance: pay it, wait for its confirmation, or see it received. */
+export function PaymentPanel({
+  view,
+  token,
+  paymentReturn,
+  confirming,
+  waitedOut,
+  onCheckAgain,
+}: PaymentPanelProps) {
+  const checkout = useStartCheckout(token);
+  const refresh = useRefreshQuote(token);
+  const [leaving, setLeaving] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const money = (amount: string) => formatMoney(amount, view.currency);
+  const deposit = view.payment?.amount ?? view.acceptance?.deposit ?? '0';
+
+  if (view.payment?.status === 'paid') {
+    return (
+      <Alert color="reed" variant="light" title="Deposit received" role="status">
+        <Text fz="sm">
+          Thank you. We received your deposit of {money(view.payment.amount)}
+          {view.payment.paidAt ? ` on ${formatDay(view.payment.paidAt)}` : ''}. Keep this page or
+          the PDF for your records.
+        </Text>
+      </Alert>
+    );
+  }
+
+  if (confirming && !waitedOut) {
+    return (
+      <Alert
+        color="reed"
+        variant="light"
+        title="Thank you — we’re confirming your payment"
+        role="status"
+        icon={<Loader size="sm" color="reed" aria-hidden="true" />}
+      >
+        <Text fz="sm">This usually takes a few seconds. You can keep this page open.</Text>
+      </Alert>
+    );
+  }
+
+  if (confirming && waitedOut) {
+    return (
+      <Alert
+        color="clay"
+        variant="light"
+        title="Your payment is still being confirmed"
+        role="status"
+      >
+        <Stack gap="xs" align="flex-start">
+          <Text fz="sm">
+            We haven’t heard from the payment provider yet. If you completed the payment, there is
+            nothing more to do: it will show here once it’s confirmed, and you won’t be charged
+            twice.
+          </Text>
+          <Button size="xs" variant="default" onClick={onCheckAgain}>
+            Check again
+          </Button>
+        </Stack>
+      </Alert>
+    );
+  }
+
+  const pay = () => {
+    setError(null);
+    checkout.mutate(undefined, {
+      onSuccess: ({ url }) => {
+        setLeaving(true);
+        browser.assign(url);
+      },
+      onError: (failure) => {
+        setError(quoteErrorMessage(failure));
+        if (isQuoteRequestError(failure) && failure.code === 'DEPOSIT_ALREADY_PAID') void refresh();
+      },
+    });
+  };
+
+  return (
+    <Stack gap="sm">
+      {paymentReturn === 'cancelled' && (
+        <Alert color="stone" variant="light" title="Your payment wasn’t completed" role="status">
+          <Text fz="sm">No money was taken. You can pay the deposit whenever you’re ready.</Text>
+        </Alert>
+      )}
+      <Text fz="sm">
+        The next step is the deposit. You’ll pay on a secure payment page and then come back here.
+      </Text>
+      {error && (
+        <Alert color="red" role="alert" title="We couldn’t start the payment">
+          {error}
+        </Alert>
+      )}
+      <div>
+        <Button
+          size="md"
+          onClick={pay}
+          loading={checkout.isPending || leaving}
+          w={{ base: '100%', sm: 'auto' }}
+        >
+          Pay deposit of {money(deposit)}
+        </Button>
+      </div>
+    </Stack>
+  );
+}

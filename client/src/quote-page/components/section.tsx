@@ -1,0 +1,33 @@
+import { Paper, Title } from '@mantine/core';
+import { useId, type ReactNode } from 'react';
+
+type SectionProps = { title: string; children: ReactNode; id?: string };
+
+/** One titled part of the quote: a card with a level-2 heading that names the region. */
+export function Section({ title, children, id }: SectionProps) {
+  const headingId = useId();
+  return (
+    <Paper component="section" p="md" aria-labelledby={headingId} id={id}>
+      <Title order={2} fz="h4" id={headingId} mb="sm">
+        {title}
+      </Title>
+      {children}
+    </Paper>
+  );
+}
+
+type Row = { label: string; value: string; total?: boolean; testId?: string };
+
+/** Label-and-amount rows as a description list, the last ones optionally ruled off as a total. */
+export function MoneyRows({ rows, label }: { rows: Row[]; label?: string }) {
+  return (
+    <dl className="qp-rows" aria-label={label}>
+      {rows.map((row) => (
+        <div key={row.label} className={row.total ? 'qp-total' : undefined}>
+          <dt>{row.label}</dt>
+          <dd data-testid={row.testId}>{row.value}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
