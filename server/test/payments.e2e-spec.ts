@@ -46,6 +46,8 @@ beforeAll(async () => {
   });
   await testApp.app.listen(appPort, '127.0.0.1');
   outbox = testApp.app.get(OutboxService);
+  // Earlier test files leave mail queued (their apps run no worker): not this file's to count.
+  await testApp.dataSource.query(`DELETE FROM outbox_messages`);
 });
 afterAll(async () => {
   await testApp.close();

@@ -4,6 +4,7 @@ import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { startFakeSmtp, type FakeSmtp } from '../src/dev-fakes/fake-smtp';
 import { AppConfig } from '../src/config/app-config';
+import { MailAttachments } from '../src/mail/mail-attachments';
 import { MailTransport } from '../src/mail/mail-transport';
 import { OutboxService } from '../src/mail/outbox.service';
 import { approvedEstimate, tokenFromMail } from './support/quote-fixtures';
@@ -20,6 +21,8 @@ beforeAll(async () => {
     MAILBOX_URL: `http://127.0.0.1:${smtp.httpPort}`,
   });
   outbox = testApp.app.get(OutboxService);
+  // Earlier test files leave mail queued (their apps run no worker): not this file's to count.
+  await testApp.dataSource.query(`DELETE FROM outbox_messages`);
 });
 afterAll(async () => {
   await testApp.close();
@@ -44,6 +47,26 @@ async function sendAndReadToken(owner: Owner, estimate: EstimateView): Promise<s
   const mail = smtp.messages().find((m) => m.subject.includes(`No. ${estimate.number}`));
   expect(mail).toBeDefined();
   return tokenFromMail(mail!.text);
+}
+
+async function getEstimate(owner: Owner, id: string): Promise<EstimateView> {
+  return (
+    await testApp
+      .http()
+      .get(`/api/estimates/${id}`)
+      .set(...bearer(owner))
+      .expect(200)
+  ).body as EstimateView;
+}
+
+async function getQuoteStatus(owner: Owner, id: string): Promise<EstimateQuoteStatus> {
+  return (
+    await testApp
+      .http()
+      .get(`/api/estimates/${id}/quote`)
+      .set(...bearer(owner))
+      .expect(200)
+  ).body as EstimateQuoteStatus;
 }
 
 const view = (token: string) => testApp.http().get(`/api/quotes/${token}`);
@@ -106,13 +129,7 @@ describe('sending a quote', () => {
     expect(JSON.stringify(quote)).not.toMatch(/extendedCost|markupPct|grossMargin|unitCost/);
 
     await view(token).expect(200);
-    const after = (
-      await testApp
-        .http()
-        .get(`/api/estimates/${estimate.id}`)
-        .set(...bearer(owner))
-        .expect(200)
-    ).body as EstimateView;
+    const after = await getEstimate(owner, estimate.id);
     expect(after.status).toBe('viewed');
     expect(after.events.filter((e) => e.action === 'quote-viewed')).toHaveLength(1);
     expect(after.events.at(-1)).toMatchObject({ action: 'quote-viewed', actorName: 'Homeowner' });
@@ -186,13 +203,7 @@ describe('dead and wrong links', () => {
     await view(second).expect(200);
 
     // Staff revoke by hand.
-    const status = (
-      await testApp
-        .http()
-        .get(`/api/estimates/${estimate.id}/quote`)
-        .set(...bearer(owner))
-        .expect(200)
-    ).body as EstimateQuoteStatus;
+    const status = await getQuoteStatus(owner, estimate.id);
     const active = status.links.find((link) => link.status === 'active')!;
     await testApp
       .http()
@@ -208,13 +219,7 @@ describe('dead and wrong links', () => {
     );
     const expired = await view(third).expect(410);
     expect(expired.body.code).toBe('QUOTE_LINK_EXPIRED');
-    const after = (
-      await testApp
-        .http()
-        .get(`/api/estimates/${estimate.id}`)
-        .set(...bearer(owner))
-        .expect(200)
-    ).body as EstimateView;
+    const after = await getEstimate(owner, estimate.id);
     expect(after.status).toBe('expired');
   });
 });
@@ -291,13 +296,7 @@ describe('accepting and declining', () => {
     // Locked: no second answer, no edit, no resend, and the record itself cannot be changed.
     expect((await accept(token, quote, []).expect(409)).body.code).toBe('QUOTE_ALREADY_ANSWERED');
     await testApp.http().post(`/api/quotes/${token}/decline`).send({}).expect(409);
-    const current = (
-      await testApp
-        .http()
-        .get(`/api/estimates/${estimate.id}`)
-        .set(...bearer(owner))
-        .expect(200)
-    ).body as EstimateView;
+    const current = await getEstimate(owner, estimate.id);
     expect(current.status).toBe('accepted');
     const edit = await testApp
       .http()
@@ -337,25 +336,13 @@ describe('accepting and declining', () => {
         .expect(200)
     ).body as QuoteView;
     expect(declined.state).toBe('declined');
-    const status = (
-      await testApp
-        .http()
-        .get(`/api/estimates/${estimate.id}/quote`)
-        .set(...bearer(owner))
-        .expect(200)
-    ).body as EstimateQuoteStatus;
+    const status = await getQuoteStatus(owner, estimate.id);
     expect(status.declined).toMatchObject({ reason: 'We decided to wait until spring.' });
 
     // Sent again, then edited: the homeowner's link stops working at once.
     const again = await sendAndReadToken(owner, estimate);
     await view(again).expect(200);
-    const current = (
-      await testApp
-        .http()
-        .get(`/api/estimates/${estimate.id}`)
-        .set(...bearer(owner))
-        .expect(200)
-    ).body as EstimateView;
+    const current = await getEstimate(owner, estimate.id);
     await testApp
       .http()
       .put(`/api/estimates/${estimate.id}/draft`)
@@ -411,6 +398,7 @@ describe('the outbox', () => {
       testApp.dataSource,
       testApp.app.get(MailTransport),
       testApp.app.get(AppConfig),
+      testApp.app.get(MailAttachments),
     );
     const [a, b] = await Promise.all([outbox.drain(), second.drain()]);
     expect(a + b).toBeGreaterThanOrEqual(1);

@@ -21,11 +21,7 @@ import { DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
-import {
-  isUuid,
-  TenantRepositories,
-  type TenantRepository,
-} from '../common/tenancy/tenant-repository';
+import { TenantRepositories, type TenantRepository } from '../common/tenancy/tenant-repository';
 import { Customer } from '../customers/entities/customer.entity';
 import { Site } from '../customers/entities/site.entity';
 import { PriceBookService } from '../price-book/price-book.service';
@@ -35,6 +31,7 @@ import { EstimateEvent } from './entities/estimate-event.entity';
 import { EstimateVersion } from './entities/estimate-version.entity';
 import { Estimate } from './entities/estimate.entity';
 import { fieldErrors } from './field-errors';
+import { lockEstimate } from './lock-estimate';
 import { priceEstimateContent, type UncheckedContent } from './price-estimate';
 import { StaleDraftError } from './stale-draft';
 
@@ -447,16 +444,8 @@ export class EstimatesService {
     }
   }
 
-  /** Locks the estimate row for the transaction (writes to one estimate run one at a time). */
-  private async lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
-    const estimate = isUuid(id)
-      ? await manager.findOne(Estimate, {
-          where: { id, companyId: this.tenant.companyId },
-          lock: { mode: 'pessimistic_write' },
-        })
-      : null;
-    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
-    return estimate;
+  private lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
+    return lockEstimate(manager, id, this.tenant.companyId);
   }
 
   private async loadDraft(manager: EntityManager, estimateId: string): Promise<EstimateDraft> {

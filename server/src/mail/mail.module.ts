@@ -1,5 +1,6 @@
 import { Global, Module } from '@nestjs/common';
 import { DevMailboxController } from './dev-mailbox.controller';
+import { MailAttachments } from './mail-attachments';
 import { MailTransport } from './mail-transport';
 import { OutboxService } from './outbox.service';
 
@@ -7,7 +8,7 @@ import { OutboxService } from './outbox.service';
 @Global()
 @Module({
   controllers: [DevMailboxController],
-  providers: [MailTransport, OutboxService],
-  exports: [OutboxService],
+  providers: [MailTransport, MailAttachments, OutboxService],
+  exports: [OutboxService, MailAttachments],
 })
 export class MailModule {}

@@ -9,6 +9,7 @@ import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager } from 'typeorm';
 import { AppConfig } from '../config/app-config';
 import { OutboxMessage, type OutboxAttachment } from './entities/outbox-message.entity';
+import { MailAttachments } from './mail-attachments';
 import { MailTransport } from './mail-transport';
 
 export type NewMail = {
@@ -21,10 +22,6 @@ export type NewMail = {
   html?: string | null;
   attachments?: OutboxAttachment[];
 };
-
-type AttachmentBuilder = (
-  attachment: OutboxAttachment,
-) => Promise<{ filename: string; content: Buffer; contentType: string }>;
 
 /** After this many failed attempts a message is marked failed and left for a person to look at. */
 export const MAX_ATTEMPTS = 10;
@@ -44,7 +41,6 @@ const LEASE_SECONDS = 120;
 @Injectable()
 export class OutboxService implements OnApplicationBootstrap, OnModuleDestroy {
   private readonly logger = new Logger(OutboxService.name);
-  private readonly builders = new Map<OutboxAttachment['kind'], AttachmentBuilder>();
   private timer: NodeJS.Timeout | null = null;
   private draining: Promise<number> | null = null;
 
@@ -52,12 +48,8 @@ export class OutboxService implements OnApplicationBootstrap, OnModuleDestroy {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly transport: MailTransport,
     private readonly config: AppConfig,
+    private readonly attachments: MailAttachments,
   ) {}
-
-  /** Lets another module build an attachment at send time (the quote PDF, say). */
-  registerAttachmentBuilder(kind: OutboxAttachment['kind'], builder: AttachmentBuilder): void {
-    this.builders.set(kind, builder);
-  }
 
   /** Writes the message in `manager`'s transaction; nothing is sent until it commits. */
   async enqueue(manager: EntityManager, mail: NewMail): Promise<OutboxMessage> {
@@ -144,11 +136,7 @@ export class OutboxService implements OnApplicationBootstrap, OnModuleDestroy {
   private async attempt(message: OutboxMessage): Promise<boolean> {
     try {
       const attachments = await Promise.all(
-        message.attachments.map((attachment) => {
-          const build = this.builders.get(attachment.kind);
-          if (!build) throw new Error(`No builder for attachment kind ${attachment.kind}`);
-          return build(attachment);
-        }),
+        message.attachments.map((attachment) => this.attachments.build(attachment)),
       );
       await this.transport.send({
         messageId: message.messageId,

@@ -1,9 +1,10 @@
 import { Logger, Module, type OnModuleInit } from '@nestjs/common';
-import { HttpAdapterHost } from '@nestjs/core';
+import { HttpAdapterHost, ModuleRef } from '@nestjs/core';
 import type { Express, NextFunction, Request, Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { AppConfig } from '../config/app-config';
+import { PublicQuotesService } from '../quotes/public-quotes.service';
 
 /** The homeowner's quote page, `/q/<token>`; `/q/` alone gets the page too, which says "not found". */
 export const QUOTE_PAGE_ROUTE = '/q/{*token}';
@@ -21,8 +22,9 @@ export function clientDistDir(config: AppConfig): string {
  * Serves the quote page's HTML for `GET /q/<token>` (the staff app's index.html serves every other
  * page path; see ServeStaticModule in app.module, which leaves `/q/*` to this). A plain Express route
  * registered beside the static files rather than a controller: controllers sit under the `/api`
- * prefix, and like the static files this needs no sign-in, so no guard sees it. The token is read by
- * the page, which asks `GET /api/quotes/:token`; nothing here looks at it.
+ * prefix, and like the static files this needs no sign-in, so no guard sees it. The page reads the
+ * token and asks `GET /api/quotes/:token`; here the token only sets the page's own status (404 or
+ * 410 for a dead link, with the same friendly page).
  */
 @Module({})
 export class QuotePageHostModule implements OnModuleInit {
@@ -31,6 +33,7 @@ export class QuotePageHostModule implements OnModuleInit {
   constructor(
     private readonly adapterHost: HttpAdapterHost,
     private readonly config: AppConfig,
+    private readonly moduleRef: ModuleRef,
   ) {}
 
   onModuleInit(): void {
@@ -38,15 +41,28 @@ export class QuotePageHostModule implements OnModuleInit {
     // Tests and `npm run dev` run without a built client (Vite serves the page then).
     if (!existsSync(file)) return;
     const app = this.adapterHost.httpAdapter.getInstance<Express>();
-    app.get(QUOTE_PAGE_ROUTE, (_request: Request, response: Response, next: NextFunction) => {
-      // A quote is private to whoever holds the link: never indexed, never cached by a proxy.
-      response.setHeader('Cache-Control', 'no-store');
-      response.setHeader('X-Robots-Tag', 'noindex, nofollow');
-      response.sendFile(file, (error) => {
-        if (!error) return;
-        this.logger.error(`Could not send ${file}: ${error.message}`);
-        if (!response.headersSent) next(error);
-      });
+    // Found wherever the quotes module provides it, without importing that module here.
+    const quotes = this.moduleRef.get(PublicQuotesService, { strict: false });
+    app.get(QUOTE_PAGE_ROUTE, (request: Request, response: Response, next: NextFunction) => {
+      // Express 5 hands a wildcard over as its path segments; the token is the first.
+      const segments = request.params.token as unknown as string[] | string | undefined;
+      const token = (Array.isArray(segments) ? segments[0] : segments) ?? '';
+      quotes.pageStatus(token).then(
+        (status) => this.sendPage(file, status, response, next),
+        (error: unknown) => next(error),
+      );
+    });
+  }
+
+  private sendPage(file: string, status: number, response: Response, next: NextFunction): void {
+    // A quote is private to whoever holds the link: never indexed, never cached by a proxy.
+    response.status(status);
+    response.setHeader('Cache-Control', 'no-store');
+    response.setHeader('X-Robots-Tag', 'noindex, nofollow');
+    response.sendFile(file, (error) => {
+      if (!error) return;
+      this.logger.error(`Could not send ${file}: ${error.message}`);
+      if (!response.headersSent) next(error);
     });
   }
 }

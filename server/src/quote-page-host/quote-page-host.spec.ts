@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AppConfig } from '../config/app-config';
+import { PublicQuotesService } from '../quotes/public-quotes.service';
 import { QUOTE_PAGE_ROUTE, QuotePageHostModule } from './quote-page-host.module';
 
 // A built client of two pages, served as app.module serves it: the staff app's index.html for page
@@ -18,8 +19,18 @@ writeFileSync(join(dist, 'quote.html'), '<!doctype html><title>quote page</title
 
 @Global()
 @Module({
-  providers: [{ provide: AppConfig, useValue: { clientDistDir: dist } }],
-  exports: [AppConfig],
+  providers: [
+    { provide: AppConfig, useValue: { clientDistDir: dist } },
+    // The link's state, as the quotes module would answer it for these made-up tokens.
+    {
+      provide: PublicQuotesService,
+      useValue: {
+        pageStatus: (token: string) =>
+          Promise.resolve(token === 'qt_expired' ? 410 : token === 'qt_unknown' ? 404 : 200),
+      },
+    },
+  ],
+  exports: [AppConfig, PublicQuotesService],
 })
 class ConfigStub {}
 
@@ -56,6 +67,13 @@ describe('the quote page host', () => {
       expect(response.headers['cache-control']).toBe('no-store');
       expect(response.headers['x-robots-tag']).toBe('noindex, nofollow');
     }
+  });
+
+  it('serves the same friendly page with 404 or 410 for a dead link', async () => {
+    const unknown = await request(app.getHttpServer()).get('/q/qt_unknown').expect(404);
+    expect(unknown.text).toContain('quote page');
+    const expired = await request(app.getHttpServer()).get('/q/qt_expired').expect(410);
+    expect(expired.text).toContain('quote page');
   });
 
   it('leaves the staff app’s pages and the API alone', async () => {

@@ -1,10 +1,11 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Res } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiBody, ApiTags } from '@nestjs/swagger';
 import type { EstimateQuoteStatus } from '@pondwright/shared';
 import type { Response } from 'express';
 import { CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import { QuoteLinksService } from './quote-links.service';
 import { StaffQuotePdfService } from './staff-quote-pdf.service';
+import { sendQuoteBodyDoc } from './dto/quote.dto';
 import { sendPdf } from './send-pdf';
 
 /** Staff's side of an estimate's quote: send, resend, revoke, follow and download. */
@@ -20,6 +21,7 @@ export class EstimateQuoteController {
 
   /** Body: `sendQuoteRequestSchema` (validated with the shared zod schema in the service). */
   @Post('send')
+  @ApiBody({ schema: sendQuoteBodyDoc })
   send(
     @Param('id') id: string,
     @Body() body: unknown,

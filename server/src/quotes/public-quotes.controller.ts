@@ -1,9 +1,10 @@
 import { Body, Controller, Get, Headers, HttpCode, Param, Post, Req, Res } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { ApiBody, ApiTags } from '@nestjs/swagger';
 import type { CheckoutRedirect, QuoteView } from '@pondwright/shared';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/auth.decorators';
 import { PublicQuotesService, type RequestMeta } from './public-quotes.service';
+import { acceptQuoteBodyDoc, declineQuoteBodyDoc } from './dto/quote.dto';
 import { sendPdf } from './send-pdf';
 
 /**
@@ -23,6 +24,7 @@ export class PublicQuotesController {
 
   /** Body: `acceptQuoteRequestSchema`. */
   @Post('accept')
+  @ApiBody({ schema: acceptQuoteBodyDoc })
   @HttpCode(200)
   accept(
     @Param('token') token: string,
@@ -34,6 +36,7 @@ export class PublicQuotesController {
 
   /** Body: `declineQuoteRequestSchema`. */
   @Post('decline')
+  @ApiBody({ schema: declineQuoteBodyDoc })
   @HttpCode(200)
   decline(
     @Param('token') token: string,

@@ -246,6 +246,22 @@ export class PublicQuotesService {
     return { url };
   }
 
+  /**
+   * The HTTP status the quote page itself is served with: 200 for a usable link, else the API's 404 or
+   * 410, so a dead link is a dead page to browsers and crawlers too (the page still explains it).
+   */
+  async pageStatus(token: string): Promise<200 | 404 | 410> {
+    try {
+      await this.usableLink(this.dataSource.manager, token);
+      return 200;
+    } catch (error) {
+      if (error instanceof AppError && (error.status === 404 || error.status === 410)) {
+        return error.status;
+      }
+      throw error;
+    }
+  }
+
   async pdf(token: string): Promise<{ filename: string; bytes: Buffer }> {
     const link = await this.usableLink(this.dataSource.manager, token);
     return this.pdfForLink(link);

@@ -16,6 +16,7 @@ import { Company } from '../companies/entities/company.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
+import { lockEstimate } from '../estimates/lock-estimate';
 import { parseBody } from '../common/validation/parse-body';
 import { OutboxService } from '../mail/outbox.service';
 import { User } from '../users/entities/user.entity';
@@ -195,15 +196,8 @@ export class QuoteLinksService {
     return estimate;
   }
 
-  private async lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
-    const estimate = isUuid(id)
-      ? await manager.findOne(Estimate, {
-          where: { id, companyId: this.tenant.companyId },
-          lock: { mode: 'pessimistic_write' },
-        })
-      : null;
-    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
-    return estimate;
+  private lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
+    return lockEstimate(manager, id, this.tenant.companyId);
   }
 }
 

@@ -1,7 +1,7 @@
 import { Module, type OnModuleInit } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
-import { OutboxService } from '../mail/outbox.service';
+import { MailAttachments } from '../mail/mail-attachments';
 import { PaymentsModule } from '../payments/payments.module';
 import { QuoteLink } from './entities/quote-link.entity';
 import { EstimateQuoteController } from './estimate-quote.controller';
@@ -14,17 +14,18 @@ import { StaffQuotePdfService } from './staff-quote-pdf.service';
   imports: [PaymentsModule],
   controllers: [EstimateQuoteController, PublicQuotesController],
   providers: [QuoteLinksService, PublicQuotesService, StaffQuotePdfService],
+  exports: [PublicQuotesService],
 })
 export class QuotesModule implements OnModuleInit {
   constructor(
-    private readonly outbox: OutboxService,
+    private readonly attachments: MailAttachments,
     private readonly quotes: PublicQuotesService,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
   /** The quote e-mail's PDF is rendered when the e-mail is sent, from the link it was queued with. */
   onModuleInit(): void {
-    this.outbox.registerAttachmentBuilder('quote-pdf', async (attachment) => {
+    this.attachments.register('quote-pdf', async (attachment) => {
       const link = await this.dataSource.manager.findOneByOrFail(QuoteLink, {
         id: attachment.linkId,
       });

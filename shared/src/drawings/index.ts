@@ -28,3 +28,4 @@ export { insetConvexPoints } from '../engine/geometry/convex-inset';
 export { offsetPolylineRight } from './polyline-offset';
 export { lengthLabel } from './length-label';
 export { boundsOf, type BoundsFt, type DimensionLine, type PointFt } from './types';
+export { projectDrawing, spansOf, depthExaggeration, type DrawingProjection } from './projection';

@@ -1,4 +1,12 @@
-import type { BoundsFt, DimensionLine, PointFt } from '@pondwright/shared/drawings';
+import {
+  depthExaggeration,
+  projectDrawing,
+  spansOf,
+  type BoundsFt,
+  type DimensionLine,
+  type DrawingProjection,
+  type PointFt,
+} from '@pondwright/shared/drawings';
 
 /** Drawing width in SVG units; text sizes below stay readable when it is shrunk to a 360 px phone. */
 export const DRAWING_WIDTH = 320;
@@ -24,14 +32,7 @@ export const DRAWING_COLORS = {
   halo: 'var(--mantine-color-white)',
 } as const;
 
-export type Projection = {
-  width: number;
-  height: number;
-  /** SVG units per ft across and down. */
-  perFtX: number;
-  perFtY: number;
-  at: (p: PointFt) => { x: number; y: number };
-};
+export type Projection = DrawingProjection & { width: number; height: number };
 
 /**
  * Fits a drawing's bounds (ft) into `DRAWING_WIDTH`. `yUp` flips the y axis for elevations
@@ -39,30 +40,23 @@ export type Projection = {
  * proportions).
  */
 export function fitDrawing(bounds: BoundsFt, yUp: boolean, verticalScale = 1): Projection {
-  const spanX = Math.max(bounds.maxXFt - bounds.minXFt, 1e-6);
-  const spanY = Math.max(bounds.maxYFt - bounds.minYFt, 1e-6);
-  const k = (DRAWING_WIDTH - 2 * PAD_X) / spanX;
-  const ky = k * verticalScale;
+  const { spanXFt, spanYFt } = spansOf(bounds);
+  const perFt = (DRAWING_WIDTH - 2 * PAD_X) / spanXFt;
+  const projection = projectDrawing(bounds, {
+    perFt,
+    originX: PAD_X,
+    originY: PAD_Y,
+    yUp,
+    verticalScale,
+  });
   return {
+    ...projection,
     width: DRAWING_WIDTH,
-    height: Math.round(spanY * ky + 2 * PAD_Y),
-    perFtX: k,
-    perFtY: ky,
-    at: (p) => ({
-      x: PAD_X + (p.xFt - bounds.minXFt) * k,
-      y: PAD_Y + (yUp ? bounds.maxYFt - p.yFt : p.yFt - bounds.minYFt) * ky,
-    }),
+    height: Math.round(spanYFt * projection.perFtY + 2 * PAD_Y),
   };
 }
 
-/**
- * How much a cross-section's depths are stretched so a shallow basin still reads: enough to make the
- * drawing about half as tall as it is wide, at most 3×, in steps of ½.
- */
-export function depthExaggeration(bounds: BoundsFt): number {
-  const ratio = (0.5 * (bounds.maxXFt - bounds.minXFt)) / (bounds.maxYFt - bounds.minYFt);
-  return Math.min(3, Math.max(1, Math.floor(ratio * 2) / 2));
-}
+export { depthExaggeration };
 
 /** An SVG path through points, closed when `closed`. */
 export function pathOf(points: readonly PointFt[], view: Projection, closed = false): string {

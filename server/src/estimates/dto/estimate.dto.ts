@@ -4,13 +4,9 @@ import {
   saveDraftRequestSchema,
   sendBackEstimateRequestSchema,
 } from '@pondwright/shared';
-import { z } from 'zod';
+import { openApiBody } from '../../common/validation/openapi-body';
 
-/** OpenAPI bodies generated from the shared zod schemas, so the contract is written once. */
-const bodyDoc = (schema: z.ZodType) =>
-  z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' }) as object;
-
-export const createEstimateBodyDoc = bodyDoc(createEstimateRequestSchema);
-export const saveDraftBodyDoc = bodyDoc(saveDraftRequestSchema);
-export const finaliseEstimateBodyDoc = bodyDoc(finaliseEstimateRequestSchema);
-export const sendBackEstimateBodyDoc = bodyDoc(sendBackEstimateRequestSchema);
+export const createEstimateBodyDoc = openApiBody(createEstimateRequestSchema);
+export const saveDraftBodyDoc = openApiBody(saveDraftRequestSchema);
+export const finaliseEstimateBodyDoc = openApiBody(finaliseEstimateRequestSchema);
+export const sendBackEstimateBodyDoc = openApiBody(sendBackEstimateRequestSchema);

@@ -9,6 +9,7 @@ import {
 } from '@pondwright/shared/pricing';
 import { z } from 'zod';
 import { effectiveDateSchema, versionNoteSchema } from '../effective-date';
+import { openApiBody } from '../../common/validation/openapi-body';
 
 /**
  * The price book's request bodies. They wrap the shared zod schemas (one contract per shape) and are
@@ -89,10 +90,7 @@ export type MaterialsView = {
 /** An import problem: `field` reads "line 7, column unitCost"; line and column are given apart too. */
 export type CsvImportProblem = { field: string; line: number; column: string; message: string };
 
-// OpenAPI descriptions of the bodies, from the same schemas.
-const jsonSchema = (schema: z.ZodType) =>
-  z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' }) as object;
-export const savePriceBookBodyDoc = jsonSchema(savePriceBookRequestSchema);
-export const savePolicyBodyDoc = jsonSchema(savePolicyRequestSchema);
-export const importPriceBookBodyDoc = jsonSchema(importPriceBookRequestSchema);
-export const materialDoc = jsonSchema(materialSchema);
+export const savePriceBookBodyDoc = openApiBody(savePriceBookRequestSchema);
+export const savePolicyBodyDoc = openApiBody(savePolicyRequestSchema);
+export const importPriceBookBodyDoc = openApiBody(importPriceBookRequestSchema);
+export const materialDoc = openApiBody(materialSchema);

@@ -1,4 +1,12 @@
-import type { BoundsFt, DimensionLine, PointFt } from '@pondwright/shared/drawings';
+import {
+  depthExaggeration,
+  projectDrawing,
+  spansOf,
+  type BoundsFt,
+  type DimensionLine,
+  type DrawingProjection,
+  type PointFt,
+} from '@pondwright/shared/drawings';
 import { COLORS, DRAWING_COLORS, TYPE } from './pdf-theme';
 import type { QuoteTypesetter } from './quote-typesetter';
 
@@ -6,16 +14,12 @@ import type { QuoteTypesetter } from './quote-typesetter';
 const PAD_X = 38;
 const PAD_Y = 10;
 
-/** A drawing fitted on the page: its size and where a point in ft lands, pt. */
-export type DrawingFrame = {
+/** A drawing fitted on the page: its box and where a point in ft lands, pt. */
+export type DrawingFrame = DrawingProjection & {
   left: number;
   top: number;
   width: number;
   height: number;
-  /** pt per ft across and down. */
-  perFtX: number;
-  perFtY: number;
-  at: (point: PointFt) => { x: number; y: number };
 };
 
 /**
@@ -29,40 +33,30 @@ export function fitDrawing(
   yUp: boolean,
   verticalScale = 1,
 ): DrawingFrame {
-  const spanX = Math.max(bounds.maxXFt - bounds.minXFt, 1e-6);
-  const spanY = Math.max(bounds.maxYFt - bounds.minYFt, 1e-6);
-  const k = Math.min(
-    (box.maxWidth - 2 * PAD_X) / spanX,
-    (box.maxHeight - 2 * PAD_Y) / (spanY * verticalScale),
+  const { spanXFt, spanYFt } = spansOf(bounds);
+  const perFt = Math.min(
+    (box.maxWidth - 2 * PAD_X) / spanXFt,
+    (box.maxHeight - 2 * PAD_Y) / (spanYFt * verticalScale),
   );
-  const ky = k * verticalScale;
-  const width = spanX * k + 2 * PAD_X;
-  const height = spanY * ky + 2 * PAD_Y;
+  const width = spanXFt * perFt + 2 * PAD_X;
   const left = box.left + (box.maxWidth - width) / 2;
-  const originX = left + PAD_X;
-  const originY = box.top + PAD_Y;
+  const projection = projectDrawing(bounds, {
+    perFt,
+    originX: left + PAD_X,
+    originY: box.top + PAD_Y,
+    yUp,
+    verticalScale,
+  });
   return {
+    ...projection,
     left,
     top: box.top,
     width,
-    height,
-    perFtX: k,
-    perFtY: ky,
-    at: (p) => ({
-      x: originX + (p.xFt - bounds.minXFt) * k,
-      y: originY + (yUp ? bounds.maxYFt - p.yFt : p.yFt - bounds.minYFt) * ky,
-    }),
+    height: spanYFt * projection.perFtY + 2 * PAD_Y,
   };
 }
 
-/**
- * How much a cross-section's depths are stretched so a shallow basin still reads: the app's rule
- * (about half as tall as wide, at most 3×, in steps of ½), so paper and screen agree.
- */
-export function depthExaggeration(bounds: BoundsFt): number {
-  const ratio = (0.5 * (bounds.maxXFt - bounds.minXFt)) / (bounds.maxYFt - bounds.minYFt);
-  return Math.min(3, Math.max(1, Math.floor(ratio * 2) / 2));
-}
+export { depthExaggeration };
 
 /** Adds a path through the points to the document (closed when `closed`), ready to fill or stroke. */
 export function tracePath(
