@@ -126,7 +126,12 @@ describe('sending a quote', () => {
     expect(quote.cautions.join(' ')).toMatch(/call-before-you-dig/);
     expect(quote.drawings.plan?.basins.length).toBeGreaterThan(0);
     // The homeowner never sees costs or margins.
-    expect(JSON.stringify(quote)).not.toMatch(/extendedCost|markupPct|grossMargin|unitCost/);
+    expect(JSON.stringify(quote)).not.toMatch(
+      /extendedCost|markupPct|grossMargin|unitCost|direct cost|[Cc]ontingency/,
+    );
+    // What is included names the work in plain words; the add-on is offered, not included.
+    expect(quote.included.some((item) => /liner/i.test(item))).toBe(true);
+    expect(quote.included).not.toContain('Flagstone bench beside the pond');
 
     await view(token).expect(200);
     const after = await getEstimate(owner, estimate.id);

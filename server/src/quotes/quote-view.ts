@@ -138,9 +138,15 @@ function highlights(content: EstimateContent, computed: EstimateComputed, system
   return rows;
 }
 
-/** The base price's lines as plain words, by category; labour is summed into crew-days above. */
+/**
+ * The base price's lines as plain words, by category. Labour is one line (its hours are in the crew
+ * time above); the contingency is left out: it is an allowance inside the price, not something built,
+ * and its description names the direct cost, which is the company's business, not the homeowner's.
+ */
 function included(computed: EstimateComputed): string[] {
-  const lines = computed.priced.lines.filter((line) => line.category !== 'labor');
+  const lines = computed.priced.lines.filter(
+    (line) => line.category !== 'labor' && line.source !== 'contingency',
+  );
   const ordered = [...lines].sort(
     (a, b) => PRICE_CATEGORIES.indexOf(a.category) - PRICE_CATEGORIES.indexOf(b.category),
   );
