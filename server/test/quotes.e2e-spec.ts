@@ -7,6 +7,7 @@ import { AppConfig } from '../src/config/app-config';
 import { MailAttachments } from '../src/mail/mail-attachments';
 import { MailTransport } from '../src/mail/mail-transport';
 import { OutboxService } from '../src/mail/outbox.service';
+import { QuoteExpiryService } from '../src/quotes/quote-expiry.service';
 import { approvedEstimate, tokenFromMail } from './support/quote-fixtures';
 import { addMember, bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
 
@@ -222,10 +223,13 @@ describe('dead and wrong links', () => {
       `UPDATE quote_links SET expires_at = now() - interval '1 minute' WHERE revoked_at IS NULL AND estimate_id = $1`,
       [estimate.id],
     );
+    // The minute sweep finds the lapsed quote before anyone opens the dead link.
+    expect(await testApp.app.get(QuoteExpiryService).sweep()).toBeGreaterThanOrEqual(1);
     const expired = await view(third).expect(410);
     expect(expired.body.code).toBe('QUOTE_LINK_EXPIRED');
     const after = await getEstimate(owner, estimate.id);
     expect(after.status).toBe('expired');
+    expect(after.events.filter((e) => e.action === 'quote-expired')).toHaveLength(1);
   });
 });
 

@@ -6,7 +6,7 @@ import {
   quoteSelectionTotals,
   type QuoteView,
 } from '@pondwright/shared';
-import { DataSource, IsNull, MoreThan, Not, type EntityManager } from 'typeorm';
+import { DataSource, IsNull, Not, type EntityManager } from 'typeorm';
 import { hashToken } from '../auth/secure-token';
 import { AppError } from '../common/errors/app-error';
 import { parseBody } from '../common/validation/parse-body';
@@ -25,6 +25,7 @@ import { QuoteAcceptance } from './entities/quote-acceptance.entity';
 import { QuoteDecline } from './entities/quote-decline.entity';
 import { QuoteLink } from './entities/quote-link.entity';
 import { HOMEOWNER, recordEstimateEvent } from './estimate-events';
+import { expireLapsedQuotes } from './quote-expiry';
 import { renderQuotePdf } from './quote-pdf/render-quote-pdf';
 import { quoteAcceptedHomeownerMail, quoteAnsweredStaffMail, money } from './quote-mail';
 import { acceptanceView, loadQuoteRecords, paymentView } from './quote-records';
@@ -314,7 +315,7 @@ export class PublicQuotesService {
     if (link.expiresAt.getTime() <= Date.now()) {
       const acceptedHere = await manager.existsBy(QuoteAcceptance, { linkId: link.id });
       if (!acceptedHere) {
-        await this.markExpired(manager, link);
+        await expireLapsedQuotes(manager, link.estimateId);
         throw new AppError(
           'QUOTE_LINK_EXPIRED',
           `This quote expired on ${link.expiresAt.toISOString().slice(0, 10)}. Ask ${company.name} for an updated one.`,
@@ -322,21 +323,6 @@ export class PublicQuotesService {
       }
     }
     return link;
-  }
-
-  /** An estimate whose last link lapsed unanswered becomes `expired` (checked lazily, on use). */
-  private async markExpired(manager: EntityManager, link: QuoteLink): Promise<void> {
-    const stillOpen = await manager.existsBy(QuoteLink, {
-      estimateId: link.estimateId,
-      revokedAt: IsNull(),
-      expiresAt: MoreThan(new Date()),
-    });
-    if (stillOpen) return;
-    await manager.query(
-      `UPDATE estimates SET status = 'expired', updated_at = now()
-       WHERE id = $1 AND status IN ('sent', 'viewed')`,
-      [link.estimateId],
-    );
   }
 
   /** Locks the estimate; it must still be waiting for the homeowner's answer on this link's version. */

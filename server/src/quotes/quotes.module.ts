@@ -7,13 +7,14 @@ import { QuoteLink } from './entities/quote-link.entity';
 import { EstimateQuoteController } from './estimate-quote.controller';
 import { PublicQuotesController } from './public-quotes.controller';
 import { PublicQuotesService } from './public-quotes.service';
+import { QuoteExpiryService } from './quote-expiry.service';
 import { QuoteLinksService } from './quote-links.service';
 import { StaffQuotePdfService } from './staff-quote-pdf.service';
 
 @Module({
   imports: [PaymentsModule],
   controllers: [EstimateQuoteController, PublicQuotesController],
-  providers: [QuoteLinksService, PublicQuotesService, StaffQuotePdfService],
+  providers: [QuoteLinksService, PublicQuotesService, StaffQuotePdfService, QuoteExpiryService],
   exports: [PublicQuotesService],
 })
 export class QuotesModule implements OnModuleInit {

@@ -15,6 +15,7 @@ const ACTION_LABELS: Record<string, string> = {
   'quote-link-revoked': 'Revoked a quote link',
   'quote-accepted': 'Quote accepted',
   'quote-declined': 'Quote declined',
+  'quote-expired': 'Quote link expired unanswered',
   'deposit-paid': 'Deposit paid',
   'deposit-needs-review': 'Deposit needs a look',
 };
