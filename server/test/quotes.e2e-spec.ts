@@ -380,6 +380,10 @@ describe('the outbox', () => {
       expect(pending!.last_error).toBeTruthy();
       // Not due yet: a second drain during the back-off sends nothing and spends no attempt.
       expect(await outbox.drain()).toBe(0);
+      // The estimator can see the e-mail has not left yet, and why.
+      const waiting = await getQuoteStatus(owner, estimate.id);
+      expect(waiting.links[0]!.email).toMatchObject({ status: 'pending', attempts: 1 });
+      expect(waiting.links[0]!.email!.lastError).toMatch(/ECONNREFUSED/);
     } finally {
       smtp = await startFakeSmtp({ smtpPort, httpPort });
     }
@@ -396,6 +400,12 @@ describe('the outbox', () => {
       [owner.companyId],
     )) as Array<{ status: string; attempts: number }>;
     expect(row).toEqual({ status: 'sent', attempts: 2 });
+    const delivered = await getQuoteStatus(owner, estimate.id);
+    expect(delivered.links[0]!.email).toMatchObject({
+      status: 'sent',
+      attempts: 2,
+      lastError: null,
+    });
   });
 
   it('never hands one message to two drains running at once', async () => {

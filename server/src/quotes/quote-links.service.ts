@@ -166,11 +166,17 @@ export class QuoteLinksService {
       }),
       loadQuoteRecords(manager, estimate.id),
     ]);
+    const emails = await this.quoteEmails(
+      manager,
+      links.map((link) => link.id),
+    );
     const acceptedVersion = records.acceptance
       ? await manager.findOneByOrFail(EstimateVersion, { id: records.acceptance.versionId })
       : null;
     return {
-      links: links.map((link) => linkView(link, records.acceptance?.linkId ?? null)),
+      links: links.map((link) =>
+        linkView(link, records.acceptance?.linkId ?? null, emails.get(link.id) ?? null),
+      ),
       acceptance:
         records.acceptance && acceptedVersion
           ? {
@@ -196,12 +202,48 @@ export class QuoteLinksService {
     return estimate;
   }
 
+  /** The quote e-mail queued with each link (its PDF attachment names the link). */
+  private async quoteEmails(
+    manager: EntityManager,
+    linkIds: string[],
+  ): Promise<Map<string, QuoteLinkView['email']>> {
+    if (linkIds.length === 0) return new Map();
+    const rows = (await manager.query(
+      `SELECT a."linkId" AS link_id, m.status, m.attempts, m.last_error, m.sent_at
+       FROM outbox_messages m
+       CROSS JOIN LATERAL jsonb_to_recordset(m.attachments) AS a("linkId" text)
+       WHERE m.kind = 'quote-sent' AND m.company_id = $1 AND a."linkId" = ANY($2::text[])`,
+      [this.tenant.companyId, linkIds],
+    )) as Array<{
+      link_id: string;
+      status: 'pending' | 'sent' | 'failed';
+      attempts: number;
+      last_error: string | null;
+      sent_at: Date | null;
+    }>;
+    return new Map(
+      rows.map((row) => [
+        row.link_id,
+        {
+          status: row.status,
+          attempts: row.attempts,
+          lastError: row.last_error,
+          sentAt: row.sent_at ? new Date(row.sent_at).toISOString() : null,
+        },
+      ]),
+    );
+  }
+
   private lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
     return lockEstimate(manager, id, this.tenant.companyId);
   }
 }
 
-function linkView(link: QuoteLink, acceptedLinkId: string | null): QuoteLinkView {
+function linkView(
+  link: QuoteLink,
+  acceptedLinkId: string | null,
+  email: QuoteLinkView['email'],
+): QuoteLinkView {
   const now = Date.now();
   const status: QuoteLinkView['status'] =
     link.id === acceptedLinkId
@@ -221,5 +263,6 @@ function linkView(link: QuoteLink, acceptedLinkId: string | null): QuoteLinkView
     revokedAt: link.revokedAt?.toISOString() ?? null,
     firstViewedAt: link.firstViewedAt?.toISOString() ?? null,
     createdByName: link.createdBy?.name ?? '',
+    email,
   };
 }

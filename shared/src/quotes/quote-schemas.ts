@@ -122,6 +122,13 @@ export type QuoteLinkView = {
   revokedAt: string | null;
   firstViewedAt: string | null;
   createdByName: string;
+  /** The quote e-mail's delivery through the outbox: waiting (with retries), sent, or given up. */
+  email: {
+    status: 'pending' | 'sent' | 'failed';
+    attempts: number;
+    lastError: string | null;
+    sentAt: string | null;
+  } | null;
 };
 
 /** Staff's view of an estimate's quote: links, the acceptance and the deposit. */

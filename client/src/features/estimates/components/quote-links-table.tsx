@@ -67,6 +67,7 @@ export function QuoteLinksTable({ estimateId, links, readOnly = false }: QuoteLi
                     <Text size="xs" c="dimmed">
                       by {link.createdByName}
                     </Text>
+                    <EmailDelivery email={link.email} />
                   </Table.Td>
                   <Table.Td>{formatDateTime(link.firstViewedAt) || 'Not yet'}</Table.Td>
                   <Table.Td>
@@ -120,5 +121,29 @@ export function QuoteLinksTable({ estimateId, links, readOnly = false }: QuoteLi
         send a new link at any time.
       </ConfirmDialog>
     </>
+  );
+}
+
+/** Whether the quote e-mail has left: the outbox retries through a mail-server outage. */
+function EmailDelivery({ email }: { email: QuoteLinkView['email'] }) {
+  if (!email) return null;
+  if (email.status === 'sent') {
+    return (
+      <Text size="xs" c="reed.7">
+        E-mail delivered {formatDateTime(email.sentAt)}
+      </Text>
+    );
+  }
+  if (email.status === 'failed') {
+    return (
+      <Text size="xs" c="red.7" title={email.lastError ?? undefined}>
+        E-mail not delivered after {email.attempts} tries: check the address, then resend
+      </Text>
+    );
+  }
+  return (
+    <Text size="xs" c="clay.7" title={email.lastError ?? undefined}>
+      {email.attempts === 0 ? 'E-mail queued' : `E-mail retrying (tried ${email.attempts}×)`}
+    </Text>
   );
 }

@@ -215,6 +215,47 @@ describe('The quote’s links', () => {
     expect(within(links).queryByRole('button', { name: /Revoke/ })).not.toBeInTheDocument();
   });
 
+  it('says whether each quote e-mail has left, is retrying, or gave up', async () => {
+    setAccessToken('t');
+    mockApi({
+      [routes.estimate]: json(at('sent')),
+      [routes.quote]: json(
+        buildQuoteStatus({
+          links: [
+            buildQuoteLink({
+              email: {
+                status: 'pending',
+                attempts: 2,
+                lastError: 'connect ECONNREFUSED',
+                sentAt: null,
+              },
+            }),
+            buildQuoteLink({
+              id: 'link-0',
+              status: 'revoked',
+              createdAt: '2026-12-02T09:00:00.000Z',
+              email: {
+                status: 'failed',
+                attempts: 10,
+                lastError: '550 mailbox unavailable',
+                sentAt: null,
+              },
+            }),
+          ],
+        }),
+      ),
+      [routes.customer]: json(customer),
+    });
+    renderWithProviders(<Builder />);
+
+    const links = await screen.findByRole('table', { name: 'Links sent' });
+    expect(within(links).getByText('E-mail retrying (tried 2×)')).toBeInTheDocument();
+    expect(within(links).getByText(/E-mail not delivered after 10 tries/)).toHaveAttribute(
+      'title',
+      '550 mailbox unavailable',
+    );
+  });
+
   it('downloads the PDF with the bearer token', async () => {
     setAccessToken('t');
     const createObjectURL = vi.fn(() => 'blob:quote');

@@ -10,6 +10,7 @@ export function buildQuoteLink(overrides: Partial<QuoteLinkView> = {}): QuoteLin
     expiresAt: '2027-01-02T09:00:00.000Z',
     revokedAt: null,
     firstViewedAt: null,
+    email: { status: 'sent', attempts: 1, lastError: null, sentAt: '2026-12-03T09:00:05.000Z' },
     createdByName: 'Olive Owner',
     ...overrides,
   };
