@@ -12,6 +12,7 @@ import { CustomersModule } from './customers/customers.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
 import { TenancyModule } from './common/tenancy/tenancy.module';
+import { redactRequestForLog } from './common/logging/redact-request';
 import { AppConfig } from './config/app-config';
 import { AppConfigModule } from './config/app-config.module';
 import { dataSourceOptions } from './database/data-source-options';
@@ -47,13 +48,7 @@ import { UsersModule } from './users/users.module';
           // Tokens, cookies and passwords never reach the log.
           redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
           autoLogging: { ignore: (request) => request.url === '/api/health' },
-          // A quote link's token is as good as a password for that quote: never logged.
-          serializers: {
-            req: (request: { url?: string }) => ({
-              ...request,
-              url: request.url?.replace(/\/(quotes|q)\/[^/?#]+/, '/$1/[token]'),
-            }),
-          },
+          serializers: { req: redactRequestForLog },
         },
       }),
     }),
