@@ -18,7 +18,9 @@ import { AppConfigModule } from './config/app-config.module';
 import { dataSourceOptions } from './database/data-source-options';
 import { EstimatesModule } from './estimates/estimates.module';
 import { HealthModule } from './health/health.module';
+import { CrewsModule } from './crews/crews.module';
 import { InvitesModule } from './invites/invites.module';
+import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
 import { PaymentsModule } from './payments/payments.module';
 import { QuotesModule } from './quotes/quotes.module';
@@ -76,6 +78,8 @@ import { UsersModule } from './users/users.module';
     MailModule,
     PaymentsModule,
     QuotesModule,
+    CrewsModule,
+    JobsModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     // `/q/<token>` is the homeowner's quote page, quote.html, served by QuotePageHostModule.
     ServeStaticModule.forRootAsync({

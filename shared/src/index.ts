@@ -6,3 +6,4 @@ export * from './customers/customer-schemas';
 export * from './estimates/estimate-schemas';
 export * from './quotes/quote-schemas';
 export * from './quotes/quote-totals';
+export * from './jobs/job-schemas';

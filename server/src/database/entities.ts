@@ -2,6 +2,7 @@ import { LoginFailure } from '../auth/entities/login-failure.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { CompanyLogo } from '../companies/entities/company-logo.entity';
 import { Company } from '../companies/entities/company.entity';
+import { Crew } from '../crews/entities/crew.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { Site } from '../customers/entities/site.entity';
 import { EstimateDraft } from '../estimates/entities/estimate-draft.entity';
@@ -9,6 +10,9 @@ import { EstimateEvent } from '../estimates/entities/estimate-event.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { Invite } from '../invites/entities/invite.entity';
+import { JobLog } from '../jobs/entities/job-log.entity';
+import { JobScheduleChange } from '../jobs/entities/job-schedule-change.entity';
+import { Job } from '../jobs/entities/job.entity';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity';
 import { PaymentEvent } from '../payments/entities/payment-event.entity';
 import { Payment } from '../payments/entities/payment.entity';
@@ -40,4 +44,8 @@ export const entities = [
   QuoteDecline,
   Payment,
   PaymentEvent,
+  Crew,
+  Job,
+  JobScheduleChange,
+  JobLog,
 ];

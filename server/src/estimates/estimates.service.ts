@@ -31,6 +31,7 @@ import { EstimateEvent } from './entities/estimate-event.entity';
 import { EstimateVersion } from './entities/estimate-version.entity';
 import { Estimate } from './entities/estimate.entity';
 import { fieldErrors } from './field-errors';
+import { Job } from '../jobs/entities/job.entity';
 import { lockEstimate } from './lock-estimate';
 import { priceEstimateContent, type UncheckedContent } from './price-estimate';
 import { StaleDraftError } from './stale-draft';
@@ -183,7 +184,7 @@ export class EstimatesService {
   async get(id: string): Promise<EstimateView> {
     const estimate = await this.estimates.getById(id, 'Estimate');
     const manager = this.dataSource.manager;
-    const [customer, draft, versions, events] = await Promise.all([
+    const [customer, draft, versions, events, job] = await Promise.all([
       manager.findOneByOrFail(Customer, { id: estimate.customerId }),
       this.loadDraft(manager, estimate.id),
       manager.find(EstimateVersion, {
@@ -196,6 +197,7 @@ export class EstimatesService {
         relations: { actor: true },
         order: { id: 'ASC' },
       }),
+      manager.findOneBy(Job, { estimateId: estimate.id }),
     ]);
     return {
       id: estimate.id,
@@ -209,6 +211,7 @@ export class EstimatesService {
       updatedAt: estimate.updatedAt.toISOString(),
       draft: draftView(draft),
       versions: versions.map(versionSummary),
+      jobId: job?.id ?? null,
       events: events.map((event) => ({
         id: event.id,
         action: event.action,

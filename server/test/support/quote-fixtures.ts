@@ -1,4 +1,4 @@
-import type { EstimateView } from '@pondwright/shared';
+import type { EstimateView, QuoteView } from '@pondwright/shared';
 import { bearer, type TestApp } from './test-app';
 
 type Session = { accessToken: string };
@@ -83,4 +83,42 @@ export function tokenFromMail(text: string): string {
   const match = /\/q\/([A-Za-z0-9_-]{43})/.exec(text);
   if (!match) throw new Error(`No quote link in:\n${text}`);
   return match[1]!;
+}
+
+/**
+ * An estimate sent and accepted by the homeowner with the given options (all of them by default). The
+ * link's token is read from the queued e-mail, so no SMTP server is needed.
+ */
+export async function acceptedEstimate(
+  testApp: TestApp,
+  owner: Session & { companyId: string },
+  optionIds?: string[],
+): Promise<{ estimate: EstimateView; token: string; acceptance: QuoteView['acceptance'] }> {
+  const estimate = await approvedEstimate(testApp, owner);
+  await testApp
+    .http()
+    .post(`/api/estimates/${estimate.id}/send`)
+    .set(...bearer(owner))
+    .send({ recipientEmail: 'homeowner@example.test' })
+    .expect(201);
+  const [mail] = (await testApp.dataSource.query(
+    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'
+     ORDER BY created_at DESC LIMIT 1`,
+    [owner.companyId],
+  )) as Array<{ text_body: string }>;
+  const token = tokenFromMail(mail!.text_body);
+  const quote = (await testApp.http().get(`/api/quotes/${token}`).expect(200)).body as QuoteView;
+  const accepted = (
+    await testApp
+      .http()
+      .post(`/api/quotes/${token}/accept`)
+      .send({
+        fullName: 'Wren Halloway',
+        consent: true,
+        optionIds: optionIds ?? quote.options.map((option) => option.id),
+        contentSha256: quote.estimate.contentSha256,
+      })
+      .expect(200)
+  ).body as QuoteView;
+  return { estimate, token, acceptance: accepted.acceptance };
 }

@@ -194,6 +194,8 @@ export type EstimateView = {
   draft: EstimateDraftView;
   versions: EstimateVersionSummary[];
   events: EstimateEventView[];
+  /** The job made from this estimate once accepted; null until then. */
+  jobId: string | null;
 };
 
 /** The 409 body for a save or finalise from a stale copy: the current draft, so nothing is lost. */

@@ -1,5 +1,6 @@
 import Papa from 'papaparse';
 import type { z } from 'zod';
+import { FORMULA_ESCAPED, FORMULA_START } from '../csv/formula-cells';
 import { LABOR_TASKS } from '../engine/labor/labor-hours';
 import {
   disposalSchema,
@@ -40,13 +41,6 @@ const MATERIAL_ATTRIBUTE_COLUMNS = [
   'ratingWatts',
   'cableGaugeAwg',
 ] as const;
-
-/**
- * Cells a spreadsheet would run as a formula (after any apostrophes) are written with one more leading
- * apostrophe, and read back with one fewer; so "=A1", "'+x" and "-" survive a round trip unchanged.
- */
-const FORMULA_START = /^'*[=+\-@\t\r]/;
-const FORMULA_ESCAPED = /^'+[=+\-@\t\r]/;
 
 /** The columns of a price-book CSV: `section` and the union of every section's columns. */
 export const CSV_COLUMNS = [

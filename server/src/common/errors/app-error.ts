@@ -35,6 +35,13 @@ export const ERROR_STATUS = {
   WEBHOOK_SIGNATURE_INVALID: HttpStatus.BAD_REQUEST,
   LOGO_INVALID: HttpStatus.BAD_REQUEST,
   LOGO_NOT_FOUND: HttpStatus.NOT_FOUND,
+  CREW_NAME_TAKEN: HttpStatus.CONFLICT,
+  JOB_EXISTS: HttpStatus.CONFLICT,
+  ESTIMATE_NOT_ACCEPTED: HttpStatus.CONFLICT,
+  JOB_STATUS_CHANGE: HttpStatus.CONFLICT,
+  JOB_CLOSED: HttpStatus.CONFLICT,
+  LOG_CONFLICT: HttpStatus.CONFLICT,
+  FORBIDDEN: HttpStatus.FORBIDDEN,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
@@ -44,6 +51,8 @@ export class AppError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly details?: Array<{ field: string; message: string }>,
+    /** More members for the error body, e.g. the stored copy a conflicting edit is told about. */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
     this.name = 'AppError';

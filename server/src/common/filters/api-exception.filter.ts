@@ -49,7 +49,10 @@ export class ApiExceptionFilter implements ExceptionFilter {
 
   private toBody(exception: unknown): ApiErrorBody {
     if (exception instanceof AppError) {
-      return this.body(exception.status, exception.message, exception.details, exception.code);
+      return {
+        ...this.body(exception.status, exception.message, exception.details, exception.code),
+        ...exception.extra,
+      };
     }
     if (exception instanceof HttpException) {
       const status = exception.getStatus();

@@ -5,6 +5,7 @@ import { PricedTakeoffs1796094000000 } from './1796094000000-priced-takeoffs';
 import { CustomersAndSites1796097600000 } from './1796097600000-customers-and-sites';
 import { Estimates1796101200000 } from './1796101200000-estimates';
 import { QuotesPaymentsOutbox1796104800000 } from './1796104800000-quotes-payments-outbox';
+import { Jobs1796108400000 } from './1796108400000-jobs';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   CustomersAndSites1796097600000,
   Estimates1796101200000,
   QuotesPaymentsOutbox1796104800000,
+  Jobs1796108400000,
 ];

@@ -1,0 +1,330 @@
+import type {
+  DailyLogView,
+  EstimateView,
+  JobListItem,
+  JobView,
+  LogEntry,
+} from '@pondwright/shared';
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { acceptedEstimate } from './support/quote-fixtures';
+import { addMember, bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
+
+let testApp: TestApp;
+
+beforeAll(async () => {
+  testApp = await createTestApp();
+});
+afterAll(async () => {
+  await testApp.close();
+});
+
+type Session = { accessToken: string };
+type Owner = Awaited<ReturnType<typeof signupCompany>>;
+
+const cents = (money: string) => Math.round(Number(money) * 100);
+
+async function makeJob(owner: Owner, extra: Record<string, unknown> = {}) {
+  const accepted = await acceptedEstimate(testApp, owner);
+  const job = (
+    await testApp
+      .http()
+      .post('/api/jobs')
+      .set(...bearer(owner))
+      .send({ estimateId: accepted.estimate.id, ...extra })
+      .expect(201)
+  ).body as JobView;
+  return { ...accepted, job };
+}
+
+async function addCrew(owner: Session, name: string, leadUserId: string | null = null) {
+  return (
+    await testApp
+      .http()
+      .post('/api/crews')
+      .set(...bearer(owner))
+      .send({ name, leadUserId })
+      .expect(201)
+  ).body as { id: string; name: string };
+}
+
+function putLog(session: Session, jobId: string, logId: string, body: object) {
+  return testApp
+    .http()
+    .put(`/api/jobs/${jobId}/logs/${logId}`)
+    .set(...bearer(session))
+    .send(body);
+}
+
+const hours = (person: string, task: string, value: string): LogEntry =>
+  ({ id: randomUUID(), kind: 'hours', person, task, hours: value }) as LogEntry;
+
+describe('a job from an accepted quote', () => {
+  it('carries the accepted lines, with the chosen options, as its budget', async () => {
+    const owner = await signupCompany(testApp);
+    const { estimate, acceptance, job } = await makeJob(owner, { plannedStart: '2027-03-08' });
+    const budget = job.budget!;
+
+    // The budget is the accepted version's base lines plus the chosen add-on's line.
+    const [version] = (await testApp.dataSource.query(
+      `SELECT computed FROM estimate_versions WHERE estimate_id = $1`,
+      [estimate.id],
+    )) as Array<{ computed: EstimateView['draft']['computed'] }>;
+    const priced = version!.computed.priced;
+    const optionLines = priced.options.flatMap((option) => option.lines);
+    expect(budget.lines).toHaveLength(priced.lines.length + optionLines.length);
+    expect(budget.lines.map((line) => line.description)).toContain(
+      'Flagstone bench beside the pond',
+    );
+    // Cost: Σ extended cost of every budget line, in cents.
+    expect(cents(budget.cost)).toBe(
+      [...priced.lines, ...optionLines].reduce((sum, line) => sum + cents(line.extendedCost), 0),
+    );
+    // Price before tax = the accepted total − (base tax + the option's tax).
+    expect(cents(budget.priceBeforeTax)).toBe(
+      cents(acceptance!.total) - cents(priced.totals.tax) - cents(priced.options[0]!.tax),
+    );
+    expect(budget.lines.filter((line) => line.category === 'labor').every((l) => l.task)).toBe(
+      true,
+    );
+    expect(job).toMatchObject({
+      status: 'scheduled',
+      plannedStart: '2027-03-08',
+      plannedCrewDays: budget.crewDays,
+      number: estimate.number,
+    });
+
+    const again = await testApp
+      .http()
+      .post('/api/jobs')
+      .set(...bearer(owner))
+      .send({ estimateId: estimate.id })
+      .expect(409);
+    expect(again.body.code).toBe('JOB_EXISTS');
+    const view = (
+      await testApp
+        .http()
+        .get(`/api/estimates/${estimate.id}`)
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as EstimateView;
+    expect(view.jobId).toBe(job.id);
+  });
+
+  it('is refused for an estimate the homeowner has not accepted', async () => {
+    const owner = await signupCompany(testApp);
+    const customer = (await testApp.dataSource.query(
+      `INSERT INTO customers (company_id, name) VALUES ($1, 'Pending Person') RETURNING id`,
+      [owner.companyId],
+    )) as Array<{ id: string }>;
+    const draft = (
+      await testApp
+        .http()
+        .post('/api/estimates')
+        .set(...bearer(owner))
+        .send({ title: 'Not yet', customerId: customer[0]!.id })
+        .expect(201)
+    ).body as EstimateView;
+    const refused = await testApp
+      .http()
+      .post('/api/jobs')
+      .set(...bearer(owner))
+      .send({ estimateId: draft.id })
+      .expect(409);
+    expect(refused.body.code).toBe('ESTIMATE_NOT_ACCEPTED');
+  });
+});
+
+describe('the schedule', () => {
+  it('moves a job with a reason, keeps every move, and lists jobs by week', async () => {
+    const owner = await signupCompany(testApp);
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const crew = await addCrew(owner, 'North crew');
+    const { job } = await makeJob(owner, { plannedStart: '2027-03-08', crewId: crew.id });
+
+    const noReason = await testApp
+      .http()
+      .post(`/api/jobs/${job.id}/schedule`)
+      .set(...bearer(owner))
+      .send({ plannedStart: '2027-03-15', crewId: crew.id })
+      .expect(400);
+    expect(noReason.body.details).toEqual([{ field: 'reason', message: 'Say why the job moves' }]);
+    await testApp
+      .http()
+      .post(`/api/jobs/${job.id}/schedule`)
+      .set(...bearer(crewLead))
+      .send({ plannedStart: '2027-03-15', crewId: crew.id, reason: 'weather' })
+      .expect(403);
+    const moved = (
+      await testApp
+        .http()
+        .post(`/api/jobs/${job.id}/schedule`)
+        .set(...bearer(owner))
+        .send({
+          plannedStart: '2027-03-15',
+          crewId: crew.id,
+          reason: 'weather',
+          note: 'Ground frozen',
+        })
+        .expect(200)
+    ).body as JobView;
+    expect(moved.scheduleChanges.map((c) => [c.fromStart, c.toStart, c.reason])).toEqual([
+      [null, '2027-03-08', null],
+      ['2027-03-08', '2027-03-15', 'weather'],
+    ]);
+
+    // 2027-03-15 is a Monday; the planned end counts working days only.
+    const week = (
+      await testApp
+        .http()
+        .get('/api/jobs?from=2027-03-15&to=2027-03-19')
+        .set(...bearer(crewLead))
+        .expect(200)
+    ).body as JobListItem[];
+    expect(week.map((j) => j.id)).toEqual([job.id]);
+    expect(week[0]).toMatchObject({ crewName: 'North crew', plannedStart: '2027-03-15' });
+    const earlier = (
+      await testApp
+        .http()
+        .get('/api/jobs?from=2027-03-01&to=2027-03-05')
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as JobListItem[];
+    expect(earlier).toEqual([]);
+    await testApp
+      .http()
+      .get('/api/jobs?from=March')
+      .set(...bearer(owner))
+      .expect(400);
+  });
+});
+
+describe('daily logs', () => {
+  it('are saved once per id: a resend changes nothing, a stale edit is a conflict', async () => {
+    const owner = await signupCompany(testApp);
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const { job } = await makeJob(owner);
+    const logId = randomUUID();
+    const body = {
+      logDate: '2027-03-15',
+      notes: 'Dug the main basin.',
+      entries: [hours('Ana', 'excavation', '7.5'), hours('Ben', 'excavation', '6')],
+      baseRevision: 0,
+    };
+
+    const created = await putLog(crewLead, job.id, logId, body).expect(201);
+    expect((created.body as DailyLogView).revision).toBe(1);
+    // The phone did not hear the answer and sends it again: same log, nothing new.
+    const resent = await putLog(crewLead, job.id, logId, body).expect(200);
+    expect((resent.body as DailyLogView).revision).toBe(1);
+
+    const edited = { ...body, notes: 'Dug the main basin and the shelf.', baseRevision: 1 };
+    expect((await putLog(crewLead, job.id, logId, edited).expect(200)).body.revision).toBe(2);
+    // A second phone still holds revision 1 and edits something else.
+    const stale = { ...body, notes: 'Rain stopped work at 2 pm.', baseRevision: 1 };
+    const conflict = await putLog(owner, job.id, logId, stale).expect(409);
+    expect(conflict.body.code).toBe('LOG_CONFLICT');
+    expect(conflict.body.current).toMatchObject({
+      revision: 2,
+      notes: 'Dug the main basin and the shelf.',
+    });
+
+    const logs = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}/logs`)
+        .set(...bearer(crewLead))
+        .expect(200)
+    ).body as DailyLogView[];
+    expect(logs).toHaveLength(1);
+    expect(logs[0]!.entries).toHaveLength(2);
+
+    const invalid = await putLog(crewLead, job.id, randomUUID(), {
+      ...body,
+      entries: [hours('Ana', 'excavation', '30')],
+    }).expect(400);
+    expect(invalid.body.details[0].field).toBe('entries.0.hours');
+  });
+
+  it('stop when the job is closed; only the owner closes it', async () => {
+    const owner = await signupCompany(testApp);
+    const estimator = await addMember(testApp, owner, 'estimator');
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const { job } = await makeJob(owner);
+    const status = (session: Session, value: string) =>
+      testApp
+        .http()
+        .post(`/api/jobs/${job.id}/status`)
+        .set(...bearer(session))
+        .send({ status: value });
+
+    expect((await status(crewLead, 'completed').expect(409)).body.code).toBe('JOB_STATUS_CHANGE');
+    expect((await status(crewLead, 'in_progress').expect(200)).body.startedOn).toBeTruthy();
+    await status(crewLead, 'completed').expect(200);
+    await status(estimator, 'closed').expect(403);
+    expect((await status(owner, 'closed').expect(200)).body.status).toBe('closed');
+    const late = await putLog(crewLead, job.id, randomUUID(), {
+      logDate: '2027-03-20',
+      notes: '',
+      entries: [],
+      baseRevision: 0,
+    }).expect(409);
+    expect(late.body.code).toBe('JOB_CLOSED');
+  });
+});
+
+describe('who sees what', () => {
+  it('shows crew leads quantities but no money, and hides jobs from other companies', async () => {
+    const owner = await signupCompany(testApp);
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const other = await signupCompany(testApp);
+    const { job } = await makeJob(owner);
+
+    const seen = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}`)
+        .set(...bearer(crewLead))
+        .expect(200)
+    ).body as JobView;
+    expect(seen.budget).toBeNull();
+    expect(seen.crewBudget.length).toBeGreaterThan(0);
+    expect(JSON.stringify(seen)).not.toMatch(/unitCost|extendedCost|price|cost/i);
+
+    await testApp
+      .http()
+      .get(`/api/jobs/${job.id}`)
+      .set(...bearer(other))
+      .expect(404);
+    await putLog(other, job.id, randomUUID(), {
+      logDate: '2027-03-15',
+      notes: '',
+      entries: [],
+      baseRevision: 0,
+    }).expect(404);
+    const theirs = (
+      await testApp
+        .http()
+        .get('/api/jobs')
+        .set(...bearer(other))
+        .expect(200)
+    ).body as JobListItem[];
+    expect(theirs.map((j) => j.id)).not.toContain(job.id);
+
+    // A log id already used in one company is not reachable through another company's job.
+    const logId = randomUUID();
+    await putLog(crewLead, job.id, logId, {
+      logDate: '2027-03-15',
+      notes: 'ours',
+      entries: [],
+      baseRevision: 0,
+    }).expect(201);
+    const theirJob = await makeJob(other);
+    await putLog(other, theirJob.job.id, logId, {
+      logDate: '2027-03-15',
+      notes: 'theirs',
+      entries: [],
+      baseRevision: 1,
+    }).expect(404);
+  });
+});

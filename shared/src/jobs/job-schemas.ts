@@ -1,0 +1,213 @@
+import { z } from 'zod';
+import { LABOR_TASKS, type LaborTask } from '../engine/labor/labor-hours';
+import type { PriceCategory } from '../pricing/price-book-schema';
+
+/**
+ * Jobs: an accepted quote becomes a job carrying its budget; the crew lead's daily logs record what
+ * really happened; the cost report sets one against the other. Zod rules and response types only.
+ */
+
+export const JOB_STATUSES = ['scheduled', 'in_progress', 'completed', 'closed'] as const;
+export type JobStatus = (typeof JOB_STATUSES)[number];
+
+export const RESCHEDULE_REASONS = [
+  'weather',
+  'access',
+  'materials',
+  'crew',
+  'homeowner',
+  'other',
+] as const;
+export type RescheduleReason = (typeof RESCHEDULE_REASONS)[number];
+
+const isoDate = z
+  .string({ error: 'Enter a date' })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter a date as YYYY-MM-DD')
+  .refine((value) => !Number.isNaN(Date.parse(`${value}T00:00:00Z`)), 'Enter a real date');
+
+const decimal = (decimals: number, message: string) =>
+  z
+    .string({ error: message })
+    .trim()
+    .regex(new RegExp(`^\\d{1,7}(\\.\\d{1,${decimals}})?$`), message);
+
+/** `POST /api/crews`. */
+export const createCrewRequestSchema = z
+  .object({
+    name: z.string({ error: 'Name the crew' }).trim().min(1, 'Name the crew').max(80),
+    leadUserId: z.uuid({ error: 'Choose a crew lead' }).nullable().optional(),
+  })
+  .strict();
+
+/** `POST /api/jobs`: an accepted estimate becomes a job. */
+export const createJobRequestSchema = z
+  .object({
+    estimateId: z.uuid({ error: 'Choose an accepted estimate' }),
+    crewId: z.uuid({ error: 'Choose a crew' }).nullable().optional(),
+    plannedStart: isoDate.nullable().optional(),
+  })
+  .strict();
+
+/** `POST /api/jobs/:id/schedule`: a new start (and crew), with the reason when it moves. */
+export const rescheduleJobRequestSchema = z
+  .object({
+    plannedStart: isoDate,
+    crewId: z.uuid({ error: 'Choose a crew' }).nullable(),
+    plannedCrewDays: decimal(1, 'Enter crew days such as 3 or 2.5').optional(),
+    reason: z.enum(RESCHEDULE_REASONS, { error: 'Choose a reason' }).optional(),
+    note: z.string().trim().max(500, 'Use at most 500 characters').optional(),
+  })
+  .strict();
+
+/** `POST /api/jobs/:id/status`: start, complete or close the job. */
+export const jobStatusRequestSchema = z
+  .object({ status: z.enum(['in_progress', 'completed', 'closed'], { error: 'Choose a status' }) })
+  .strict();
+
+const entryId = z.uuid({ error: 'Each entry needs its own id' });
+
+export const hoursEntrySchema = z
+  .object({
+    id: entryId,
+    kind: z.literal('hours'),
+    person: z.string({ error: 'Who worked?' }).trim().min(1, 'Who worked?').max(80),
+    task: z.enum(LABOR_TASKS, { error: 'Choose a task' }),
+    hours: decimal(2, 'Enter hours such as 7.5').refine((v) => Number(v) <= 24, 'At most 24 hours'),
+  })
+  .strict();
+
+/**
+ * Materials delivered (with the supplier's ticket and unit cost), used or returned; equipment and
+ * disposal in the budget line's unit (days, loose yd³, loads). `code` ties the entry to a budget line.
+ */
+export const quantityEntrySchema = z
+  .object({
+    id: entryId,
+    kind: z.enum(['material', 'equipment', 'disposal']),
+    movement: z.enum(['delivered', 'used', 'returned']).nullable(),
+    code: z.string().trim().max(40).nullable(),
+    description: z.string({ error: 'Describe it' }).trim().min(1, 'Describe it').max(200),
+    quantity: decimal(3, 'Enter a quantity such as 2 or 1.25'),
+    unit: z.string({ error: 'Enter a unit' }).trim().min(1, 'Enter a unit').max(20),
+    unitCost: decimal(4, 'Enter a unit cost such as 12.50').nullable(),
+    supplier: z.string().trim().max(120).nullable(),
+    ticketNumber: z.string().trim().max(60).nullable(),
+  })
+  .strict()
+  .refine((entry) => (entry.kind === 'material') === (entry.movement !== null), {
+    message: 'Say whether the material was delivered, used or returned',
+    path: ['movement'],
+  });
+
+export const logEntrySchema = z.union([hoursEntrySchema, quantityEntrySchema]);
+export type HoursEntry = z.infer<typeof hoursEntrySchema>;
+export type QuantityEntry = z.infer<typeof quantityEntrySchema>;
+export type LogEntry = HoursEntry | QuantityEntry;
+
+/**
+ * `PUT /api/jobs/:jobId/logs/:logId` (the log's id is made on the phone, so a retry is the same log):
+ * the whole day's log and the revision it was edited from (0 for a new log). The same content again
+ * answers 200 unchanged; an edit from an older revision answers 409 with the stored log.
+ */
+export const saveDailyLogRequestSchema = z
+  .object({
+    logDate: isoDate,
+    notes: z.string().max(4000, 'Use at most 4000 characters'),
+    entries: z
+      .array(logEntrySchema)
+      .max(300, 'Use at most 300 entries a day')
+      .refine((e) => new Set(e.map((x) => x.id)).size === e.length, 'Each entry needs its own id'),
+    baseRevision: z.number().int().min(0),
+  })
+  .strict();
+export type SaveDailyLogRequest = z.infer<typeof saveDailyLogRequestSchema>;
+
+export type DailyLogView = {
+  id: string;
+  jobId: string;
+  logDate: string;
+  notes: string;
+  entries: LogEntry[];
+  revision: number;
+  authorName: string;
+  updatedAt: string;
+};
+
+/** One line of the job's budget: a priced line of the accepted version (base and chosen options). */
+export type BudgetLine = {
+  id: string;
+  category: PriceCategory;
+  description: string;
+  code: string | null;
+  source: string;
+  /** The labor task, for labor lines (`source` is `labor:<task>`). */
+  task: LaborTask | null;
+  quantity: string;
+  unit: string;
+  unitCost: string;
+  extendedCost: string;
+  price: string;
+};
+
+/** What the job was sold for and expected to cost: fixed when the job is made (and by change orders). */
+export type JobBudget = {
+  versionNumber: number;
+  contentSha256: string;
+  currency: string;
+  lines: BudgetLine[];
+  /** Σ extended cost of the lines. */
+  cost: string;
+  /** The accepted total without tax (discount and minimum job charge applied), options included. */
+  priceBeforeTax: string;
+  tax: string;
+  total: string;
+  laborHours: string;
+  crewDays: string;
+};
+
+/** The budget as a crew lead sees it: what to build with, never what it costs. */
+export type CrewBudgetLine = Pick<
+  BudgetLine,
+  'id' | 'category' | 'description' | 'code' | 'task' | 'quantity' | 'unit'
+>;
+
+export type JobListItem = {
+  id: string;
+  number: number;
+  title: string;
+  customerName: string;
+  siteAddress: string | null;
+  status: JobStatus;
+  crewId: string | null;
+  crewName: string | null;
+  plannedStart: string | null;
+  plannedCrewDays: string;
+  /** The last day the plan covers: start + crew days − 1, counting working days Monday to Friday. */
+  plannedEnd: string | null;
+};
+
+export type ScheduleChangeView = {
+  id: string;
+  fromStart: string | null;
+  toStart: string;
+  fromCrewName: string | null;
+  toCrewName: string | null;
+  reason: RescheduleReason | null;
+  note: string | null;
+  actorName: string;
+  createdAt: string;
+};
+
+/** `GET /api/jobs/:id`. `budget` is null for crew leads, who get `crewBudget` instead. */
+export type JobView = JobListItem & {
+  estimateId: string;
+  budget: JobBudget | null;
+  crewBudget: CrewBudgetLine[];
+  scheduleChanges: ScheduleChangeView[];
+  logs: DailyLogView[];
+  startedOn: string | null;
+  completedOn: string | null;
+  closedAt: string | null;
+};
+
+export type CrewView = { id: string; name: string; leadUserId: string | null; leadName: string | null };
