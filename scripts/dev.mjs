@@ -26,7 +26,7 @@ const apiPort = process.env.PORT ?? '3000';
 let fakes;
 try {
   fakes = await startFakes({
-    ...fakePorts({ smtpPort: 2525, mailboxPort: 2580, paymentsPort: 12111 }),
+    ...fakePorts({ smtpPort: 2525, mailboxPort: 2580, paymentsPort: 12111, s3Port: 4569 }),
     webhookUrl: appWebhookUrl(apiPort),
   });
 } catch (error) {

@@ -35,7 +35,7 @@ async function main() {
   const { DEMO_COMPANY_NAME, DEMO_USERS } = createRequire(import.meta.url)(
     '../server/dist/seed/demo-data.js',
   );
-  const ports = fakePorts({ smtpPort: 2525, mailboxPort: 2580, paymentsPort: 12111 });
+  const ports = fakePorts({ smtpPort: 2525, mailboxPort: 2580, paymentsPort: 12111, s3Port: 4569 });
   fakes = await startFakes({ ...ports, webhookUrl: appWebhookUrl(port, host) });
   const { child, url } = await startServer({
     port,

@@ -85,7 +85,7 @@ async function endToEnd() {
   try {
     // Ports apart from `npm start`'s, so the tests can run while the app is up.
     fakes = await startFakes({
-      ...fakePorts({ smtpPort: 2526, mailboxPort: 2581, paymentsPort: 12112 }),
+      ...fakePorts({ smtpPort: 2526, mailboxPort: 2581, paymentsPort: 12112, s3Port: 4570 }),
       webhookUrl: appWebhookUrl(port),
       quiet: true,
     });

@@ -138,11 +138,12 @@ export async function startServer({
  * The ports of the local fakes (fake SMTP, its mailbox API, fake payments): the given defaults, each
  * overridable from the environment so two checkouts can run side by side.
  */
-export function fakePorts({ smtpPort, mailboxPort, paymentsPort }) {
+export function fakePorts({ smtpPort, mailboxPort, paymentsPort, s3Port }) {
   return {
     smtpPort: Number(process.env.FAKE_SMTP_PORT ?? smtpPort),
     mailboxPort: Number(process.env.FAKE_MAILBOX_HTTP_PORT ?? mailboxPort),
     paymentsPort: Number(process.env.FAKE_PAYMENTS_PORT ?? paymentsPort),
+    s3Port: Number(process.env.FAKE_S3_PORT ?? s3Port),
   };
 }
 
@@ -154,13 +155,16 @@ export function appWebhookUrl(appPort, appHost = '127.0.0.1') {
 }
 
 /**
- * Starts the fake SMTP server and the fake payment provider (server/dist/dev-fakes/main.js, so the server
- * must be built) and resolves once both answer. `serverEnv` points the app server at them.
+ * Starts the fake SMTP server, the fake payment provider and the fake S3 store
+ * (server/dist/dev-fakes/main.js, so the server must be built) and resolves once all answer. `serverEnv` points the app server at them.
  */
 export async function startFakes({
   smtpPort,
   mailboxPort,
   paymentsPort,
+  s3Port,
+  // Photos stored by the fake survive restarts of `npm start`, one folder per port.
+  s3Directory = join(repoRoot, '.data', `s3-${s3Port}`),
   webhookUrl,
   quiet = false,
 }) {
@@ -172,6 +176,8 @@ export async function startFakes({
       FAKE_MAILBOX_HTTP_PORT: String(mailboxPort),
       FAKE_PAYMENTS_PORT: String(paymentsPort),
       FAKE_PAYMENTS_WEBHOOK_URL: webhookUrl,
+      FAKE_S3_PORT: String(s3Port),
+      FAKE_S3_DIR: s3Directory,
     },
     // The IPC channel is only a lifeline: the fakes exit when it closes, even if this script is killed.
     stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
@@ -185,7 +191,7 @@ export async function startFakes({
       if (!quiet) process.stdout.write(chunk);
       if (output === null) return;
       output += chunk;
-      if (output.includes('[fake-payments]')) {
+      if (output.includes('[fake-s3]')) {
         output = null;
         resolveAnnounced();
       }
@@ -197,7 +203,9 @@ export async function startFakes({
   const stop = () => stopProcess(child);
   try {
     await withTimeout(announced, 15_000, 'the local fakes did not start within 15 s');
-    await Promise.all([smtpPort, mailboxPort, paymentsPort].map((port) => waitForPort(port)));
+    await Promise.all(
+      [smtpPort, mailboxPort, paymentsPort, s3Port].map((port) => waitForPort(port)),
+    );
   } catch (error) {
     await stop();
     throw error;
@@ -214,6 +222,7 @@ export async function startFakes({
       SMTP_PORT: String(smtpPort),
       MAILBOX_URL: mailboxUrl,
       STRIPE_API_URL: paymentsUrl,
+      S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
     },
   };
 }

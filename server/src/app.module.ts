@@ -21,6 +21,7 @@ import { HealthModule } from './health/health.module';
 import { CrewsModule } from './crews/crews.module';
 import { InvitesModule } from './invites/invites.module';
 import { JobsModule } from './jobs/jobs.module';
+import { PhotosModule } from './photos/photos.module';
 import { MailModule } from './mail/mail.module';
 import { PaymentsModule } from './payments/payments.module';
 import { QuotesModule } from './quotes/quotes.module';
@@ -80,6 +81,7 @@ import { UsersModule } from './users/users.module';
     QuotesModule,
     CrewsModule,
     JobsModule,
+    PhotosModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     // `/q/<token>` is the homeowner's quote page, quote.html, served by QuotePageHostModule.
     ServeStaticModule.forRootAsync({

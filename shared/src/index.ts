@@ -7,3 +7,5 @@ export * from './estimates/estimate-schemas';
 export * from './quotes/quote-schemas';
 export * from './quotes/quote-totals';
 export * from './jobs/job-schemas';
+export * from './jobs/job-cost-report';
+export * from './jobs/job-report-csv';

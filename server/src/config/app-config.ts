@@ -86,6 +86,18 @@ export class AppConfig {
       apiUrl: this.get('STRIPE_API_URL'),
     };
   }
+  get s3() {
+    return {
+      endpoint: this.get('S3_ENDPOINT'),
+      region: this.get('S3_REGION'),
+      bucket: this.get('S3_BUCKET'),
+      accessKeyId: this.get('S3_ACCESS_KEY_ID'),
+      secretAccessKey: this.get('S3_SECRET_ACCESS_KEY'),
+    };
+  }
+  get photoMaxBytes(): number {
+    return this.get('PHOTO_MAX_BYTES');
+  }
   get logLevel(): Env['LOG_LEVEL'] {
     return this.get('LOG_LEVEL');
   }

@@ -75,6 +75,8 @@ describe('production settings', () => {
   it('accepts real provider settings', () => {
     const env = validateEnv({
       ...base,
+      S3_ACCESS_KEY_ID: 'example-access-key',
+      S3_SECRET_ACCESS_KEY: 'example-secret-key',
       STRIPE_SECRET_KEY: 'sk_live_example_only',
       STRIPE_WEBHOOK_SECRET: 'whsec_example_only',
       PUBLIC_APP_URL: 'https://ponds.example',

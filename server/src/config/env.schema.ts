@@ -13,6 +13,8 @@ export const databaseEnvSchema = z.object({
 
 const LOCAL_FAKE_STRIPE_KEY = 'sk_test_pondwright_local_fake';
 const LOCAL_FAKE_WEBHOOK_SECRET = 'whsec_pondwright_local_fake';
+/** The fixed key pair the local fake S3 store (s3rver) accepts. */
+const LOCAL_FAKE_S3_KEY = 'S3RVER';
 
 export const envSchema = databaseEnvSchema
   .extend({
@@ -65,6 +67,18 @@ export const envSchema = databaseEnvSchema
     STRIPE_SECRET_KEY: z.string().min(8).default(LOCAL_FAKE_STRIPE_KEY),
     STRIPE_WEBHOOK_SECRET: z.string().min(8).default(LOCAL_FAKE_WEBHOOK_SECRET),
     STRIPE_API_URL: z.url().optional(),
+    // Photos: any S3-compatible store through the S3 SDK; S3_ENDPOINT points it at the local fake.
+    S3_ENDPOINT: z.url().optional(),
+    S3_REGION: z.string().min(1).default('us-east-1'),
+    S3_BUCKET: z.string().min(3).default('pondwright-photos'),
+    S3_ACCESS_KEY_ID: z.string().min(1).default(LOCAL_FAKE_S3_KEY),
+    S3_SECRET_ACCESS_KEY: z.string().min(1).default(LOCAL_FAKE_S3_KEY),
+    PHOTO_MAX_BYTES: z.coerce
+      .number()
+      .int()
+      .min(100_000)
+      .max(50 * 1024 * 1024)
+      .default(15 * 1024 * 1024),
     LOG_LEVEL: z
       .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
       .default('info'),
@@ -80,6 +94,10 @@ export const envSchema = databaseEnvSchema
       refuse('STRIPE_WEBHOOK_SECRET', 'Set the webhook signing secret from the provider');
     if (env.STRIPE_API_URL)
       refuse('STRIPE_API_URL', 'Leave unset in production (it points at the local fake)');
+    if (env.S3_ACCESS_KEY_ID === LOCAL_FAKE_S3_KEY)
+      refuse('S3_ACCESS_KEY_ID', 'Set the photo store’s access key');
+    if (env.S3_SECRET_ACCESS_KEY === LOCAL_FAKE_S3_KEY)
+      refuse('S3_SECRET_ACCESS_KEY', 'Set the photo store’s secret key');
     if (!env.PUBLIC_APP_URL)
       refuse('PUBLIC_APP_URL', 'Set the address people reach the app at (quote links use it)');
   });

@@ -16,6 +16,7 @@ import { Job } from '../jobs/entities/job.entity';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity';
 import { PaymentEvent } from '../payments/entities/payment-event.entity';
 import { Payment } from '../payments/entities/payment.entity';
+import { JobPhoto } from '../photos/entities/job-photo.entity';
 import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
 import { PricedTakeoff } from '../priced-takeoffs/entities/priced-takeoff.entity';
 import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
@@ -48,4 +49,5 @@ export const entities = [
   Job,
   JobScheduleChange,
   JobLog,
+  JobPhoto,
 ];

@@ -1,7 +1,9 @@
-// `node server/dist/dev-fakes/main.js`: the fake SMTP server and the fake payment provider, for
-// `npm start`, `npm run dev` and `npm test`. One process beside the app server, loopback only.
+// `node server/dist/dev-fakes/main.js`: the fake SMTP server, the fake payment provider and the fake
+// S3-compatible photo store, for `npm start`, `npm run dev` and `npm test`. One process beside the
+// app server, loopback only.
 import { envSchema } from '../config/env.schema';
 import { startFakePayments } from './fake-payments';
+import { startFakeS3 } from './fake-s3';
 import { startFakeSmtp } from './fake-smtp';
 
 function portFromEnv(name: string, fallback: number): number {
@@ -18,6 +20,9 @@ async function main(): Promise<void> {
   const smtpPort = portFromEnv('FAKE_SMTP_PORT', 2525);
   const mailboxPort = portFromEnv('FAKE_MAILBOX_HTTP_PORT', 2580);
   const paymentsPort = portFromEnv('FAKE_PAYMENTS_PORT', 12111);
+  const s3Port = portFromEnv('FAKE_S3_PORT', 4569);
+  const s3Directory = process.env.FAKE_S3_DIR || '.data/s3-4569';
+  const bucket = envSchema.shape.S3_BUCKET.parse(process.env.S3_BUCKET);
   // The server's own schema supplies the defaults, so both sides agree on the local test keys.
   const secretKey = envSchema.shape.STRIPE_SECRET_KEY.parse(process.env.STRIPE_SECRET_KEY);
   const webhookSecret = envSchema.shape.STRIPE_WEBHOOK_SECRET.parse(
@@ -37,18 +42,28 @@ async function main(): Promise<void> {
     await smtp.stop();
     throw error;
   });
+  const s3 = await startFakeS3({ port: s3Port, directory: s3Directory, bucket }).catch(
+    async (error: unknown) => {
+      await Promise.all([smtp.stop(), payments.stop()]);
+      throw error;
+    },
+  );
   console.log(
     `[fake-smtp] SMTP on 127.0.0.1:${smtp.smtpPort}, mailbox at http://127.0.0.1:${smtp.httpPort}/messages`,
   );
   console.log(
     `[fake-payments] API and test checkout on ${payments.url}, webhooks to ${webhookUrl}`,
   );
+  // Printed last: the repo scripts wait for this line before starting the app.
+  console.log(
+    `[fake-s3] S3-compatible store on ${s3.url}, bucket ${bucket}, files in ${s3Directory}`,
+  );
 
   let stopping = false;
   const stop = () => {
     if (stopping) return;
     stopping = true;
-    Promise.all([smtp.stop(), payments.stop()]).then(
+    Promise.all([smtp.stop(), payments.stop(), s3.stop()]).then(
       () => process.exit(0),
       () => process.exit(1),
     );
@@ -67,7 +82,7 @@ main().catch((error: unknown) => {
   const message = error instanceof Error ? error.message : String(error);
   const inUse = (error as NodeJS.ErrnoException).code === 'EADDRINUSE';
   console.error(
-    `[dev-fakes] failed to start: ${message}${inUse ? ' (another checkout running? set FAKE_SMTP_PORT, FAKE_MAILBOX_HTTP_PORT or FAKE_PAYMENTS_PORT)' : ''}`,
+    `[dev-fakes] failed to start: ${message}${inUse ? ' (another checkout running? set FAKE_SMTP_PORT, FAKE_MAILBOX_HTTP_PORT, FAKE_PAYMENTS_PORT or FAKE_S3_PORT)' : ''}`,
   );
   process.exit(1);
 });

@@ -1,9 +1,10 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Put, Query, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { DailyLogView, JobListItem, JobView } from '@pondwright/shared';
+import type { DailyLogView, JobCostReport, JobListItem, JobView } from '@pondwright/shared';
 import type { Response } from 'express';
 import { AnyRole, CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import { JobLogsService } from './job-logs.service';
+import { JobReportService } from './job-report.service';
 import { JobsService } from './jobs.service';
 
 @ApiTags('jobs')
@@ -13,7 +14,25 @@ export class JobsController {
   constructor(
     private readonly jobs: JobsService,
     private readonly logs: JobLogsService,
+    private readonly reports: JobReportService,
   ) {}
+
+  @Roles('owner', 'estimator')
+  @Get(':id/report')
+  report(@Param('id') id: string): Promise<JobCostReport> {
+    return this.reports.report(id);
+  }
+
+  @Roles('owner', 'estimator')
+  @Get(':id/report.csv')
+  async reportCsv(@Param('id') id: string, @Res() response: Response): Promise<void> {
+    const csv = await this.reports.csv(id);
+    response
+      .status(200)
+      .type('text/csv; charset=utf-8')
+      .setHeader('Content-Disposition', `attachment; filename="${csv.filename}"`)
+      .send(csv.text);
+  }
 
   /** Body: `createJobRequestSchema`. */
   @Roles('owner', 'estimator')

@@ -283,6 +283,14 @@ export class JobsService {
     return this.get(id, role);
   }
 
+  /** The job's number: its estimate's. */
+  async numberOf(job: Job): Promise<number> {
+    const [row] = (await this.dataSource.query('SELECT number FROM estimates WHERE id = $1', [
+      job.estimateId,
+    ])) as Array<{ number: number }>;
+    return row!.number;
+  }
+
   /** The company's job, or a 404. */
   async findJob(id: string, manager: EntityManager = this.dataSource.manager): Promise<Job> {
     const job = isUuid(id)

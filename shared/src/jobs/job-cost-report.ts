@@ -370,7 +370,9 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
     });
   }
   for (const line of laborLines.filter((l) => l.task === null)) {
-    warnings.push(`The labor line "${line.description}" names no task, so no hours can be logged on it.`);
+    warnings.push(
+      `The labor line "${line.description}" names no task, so no hours can be logged on it.`,
+    );
     labor.push({
       task: null,
       label: line.description,
@@ -385,7 +387,9 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
     });
   }
   if (labor.some((row) => !toDecimal(row.actualHours).isZero())) {
-    notes.push("Labor is costed at the budget's hourly rates (quoted burdened rates), not payroll.");
+    notes.push(
+      "Labor is costed at the budget's hourly rates (quoted burdened rates), not payroll.",
+    );
   }
 
   // Materials, equipment and disposal: budget rows, then entries matched to them or to extra rows.
@@ -420,9 +424,7 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
         const candidates =
           entry.code === null
             ? []
-            : rows.filter(
-                (row) => row.code !== null && codeKey(row.code) === codeKey(entry.code!),
-              );
+            : rows.filter((row) => row.code !== null && codeKey(row.code) === codeKey(entry.code!));
         let row =
           candidates.length <= 1
             ? candidates[0]
@@ -436,7 +438,8 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
         }
         if (!row) {
           const key = `extra:${entry.code === null ? `description:${textKey(entry.description)}` : `code:${codeKey(entry.code)}`}|${unitKey(entry.unit)}`;
-          row = extras.get(key) ?? tally(key, [], { ...entry, description: entry.description.trim() });
+          row =
+            extras.get(key) ?? tally(key, [], { ...entry, description: entry.description.trim() });
           extras.set(key, row);
         }
         row.entries += 1;
@@ -446,22 +449,28 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
     return [...rows, ...extras.values()];
   };
   const unpriced = (row: QuantityTally, what: string) =>
-    warnings.push(`${row.description} is not in the budget and ${what} without a unit cost: costed 0.`);
+    warnings.push(
+      `${row.description} is not in the budget and ${what} without a unit cost: costed 0.`,
+    );
 
-  const materialRows = placeEntries('material', budgetTallies('materials', false), (row, entry, q) => {
-    if (entry.movement === 'delivered') {
-      const unitCost =
-        entry.unitCost !== null ? toDecimal(entry.unitCost) : (row.budgetUnitCost ?? ZERO);
-      if (entry.unitCost === null && row.budgetUnitCost === null) unpriced(row, 'was delivered');
-      row.delivered = row.delivered.plus(q);
-      row.deliveredValue = row.deliveredValue.plus(q.times(unitCost));
-      row.deliveredCost = row.deliveredCost.plus(roundMoney(q.times(unitCost)));
-    } else if (entry.movement === 'used') {
-      row.used = row.used.plus(q);
-    } else {
-      row.returned.push(q);
-    }
-  });
+  const materialRows = placeEntries(
+    'material',
+    budgetTallies('materials', false),
+    (row, entry, q) => {
+      if (entry.movement === 'delivered') {
+        const unitCost =
+          entry.unitCost !== null ? toDecimal(entry.unitCost) : (row.budgetUnitCost ?? ZERO);
+        if (entry.unitCost === null && row.budgetUnitCost === null) unpriced(row, 'was delivered');
+        row.delivered = row.delivered.plus(q);
+        row.deliveredValue = row.deliveredValue.plus(q.times(unitCost));
+        row.deliveredCost = row.deliveredCost.plus(roundMoney(q.times(unitCost)));
+      } else if (entry.movement === 'used') {
+        row.used = row.used.plus(q);
+      } else {
+        row.returned.push(q);
+      }
+    },
+  );
   const materials = materialRows.map((row): MaterialCostRow => {
     const averageDelivered = row.delivered.isZero()
       ? null
@@ -579,15 +588,13 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
     estimated: sumOf(linesOf(category), 'extendedCost'),
     actual: sumDecimals(actualByCategory[category].map((row) => toDecimal(row.actualCost))),
   }));
-  const categories = categoryFigures.map(
-    ({ category, estimated, actual }): CategoryCostRow => ({
-      category,
-      estimatedCost: formatMoney(estimated),
-      actualCost: formatMoney(actual),
-      variance: formatMoney(actual.minus(estimated)),
-      variancePct: variancePct(actual.minus(estimated), estimated),
-    }),
-  );
+  const categories = categoryFigures.map(({ category, estimated, actual }): CategoryCostRow => ({
+    category,
+    estimatedCost: formatMoney(estimated),
+    actualCost: formatMoney(actual),
+    variance: formatMoney(actual.minus(estimated)),
+    variancePct: variancePct(actual.minus(estimated), estimated),
+  }));
   const price = toDecimal(budget.priceBeforeTax);
   const estimatedCost = toDecimal(budget.cost);
   const linesCost = sumDecimals(categoryFigures.map((figure) => figure.estimated));

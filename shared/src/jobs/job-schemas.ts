@@ -210,4 +210,41 @@ export type JobView = JobListItem & {
   closedAt: string | null;
 };
 
-export type CrewView = { id: string; name: string; leadUserId: string | null; leadName: string | null };
+export type CrewView = {
+  id: string;
+  name: string;
+  leadUserId: string | null;
+  leadName: string | null;
+};
+
+export const PHOTO_KINDS = ['before', 'progress', 'after', 'ticket'] as const;
+export type PhotoKind = (typeof PHOTO_KINDS)[number];
+
+/**
+ * The form fields beside the file in `PUT /api/jobs/:jobId/photos/:photoId` (multipart, file field
+ * `photo`); the photo's id is made on the phone so a retried upload is the same photo.
+ */
+export const uploadPhotoFieldsSchema = z
+  .object({
+    kind: z.enum(PHOTO_KINDS, {
+      error: 'Say what the photo shows: before, progress, after or a ticket',
+    }),
+    caption: z.string().trim().max(200, 'Use at most 200 characters').default(''),
+    logId: z.uuid({ error: 'Give the daily log’s id' }).optional(),
+  })
+  .strict();
+
+export type PhotoView = {
+  id: string;
+  jobId: string;
+  logId: string | null;
+  kind: PhotoKind;
+  caption: string;
+  widthPx: number;
+  heightPx: number;
+  uploadedByName: string;
+  createdAt: string;
+  /** API paths (they need the bearer token): the image, at most 2048 px, and a 320 px thumbnail. */
+  imagePath: string;
+  thumbnailPath: string;
+};

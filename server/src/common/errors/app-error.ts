@@ -42,6 +42,10 @@ export const ERROR_STATUS = {
   JOB_CLOSED: HttpStatus.CONFLICT,
   LOG_CONFLICT: HttpStatus.CONFLICT,
   FORBIDDEN: HttpStatus.FORBIDDEN,
+  PHOTO_STORE_UNAVAILABLE: HttpStatus.BAD_GATEWAY,
+  PHOTO_NOT_AN_IMAGE: HttpStatus.BAD_REQUEST,
+  PHOTO_TOO_LARGE: HttpStatus.PAYLOAD_TOO_LARGE,
+  PHOTO_ID_TAKEN: HttpStatus.CONFLICT,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;

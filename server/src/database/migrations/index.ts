@@ -6,6 +6,7 @@ import { CustomersAndSites1796097600000 } from './1796097600000-customers-and-si
 import { Estimates1796101200000 } from './1796101200000-estimates';
 import { QuotesPaymentsOutbox1796104800000 } from './1796104800000-quotes-payments-outbox';
 import { Jobs1796108400000 } from './1796108400000-jobs';
+import { JobPhotos1796112000000 } from './1796112000000-job-photos';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   Estimates1796101200000,
   QuotesPaymentsOutbox1796104800000,
   Jobs1796108400000,
+  JobPhotos1796112000000,
 ];
