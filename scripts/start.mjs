@@ -49,6 +49,7 @@ async function main() {
     PostgreSQL 127.0.0.1:${databaseEnv().DB_PORT} (private cluster in .data/postgres)
     Mailbox    ${fakes.mailboxUrl}/messages   (every e-mail sent, caught by the fake SMTP server on 127.0.0.1:${ports.smtpPort})
     Checkout   ${fakes.paymentsUrl}/checkout/…   (fake payment provider: test checkout, no real money)
+    Photos     http://127.0.0.1:${ports.s3Port}   (fake S3-compatible store for job photos, files in .data/s3-${ports.s3Port})
 
   Demo sign-ins (company "${DEMO_COMPANY_NAME}"):
 ${DEMO_USERS.map((person) => `    ${person.role.padEnd(10)} ${person.email.padEnd(30)} ${person.password}`).join('\n')}
