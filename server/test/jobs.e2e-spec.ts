@@ -328,3 +328,127 @@ describe('who sees what', () => {
     }).expect(404);
   });
 });
+
+describe('the cost report and learned rates', () => {
+  it('costs the logged hours at the quoted rate and teaches the price book from closed jobs', async () => {
+    const owner = await signupCompany(testApp);
+    const estimator = await addMember(testApp, owner, 'estimator');
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const { job } = await makeJob(owner);
+    const budget = job.budget!;
+    const rock = budget.lines.find((line) => line.task === 'rockPlacing')!;
+    const quotedRockHours = Number(rock.quantity);
+
+    // Two days: the crew needs 1.5 × the quoted rock-placing hours, split 60 / 40 over the days.
+    const day1 = (quotedRockHours * 1.5 * 0.6).toFixed(2);
+    const day2 = (quotedRockHours * 1.5 * 0.4).toFixed(2);
+    await putLog(crewLead, job.id, randomUUID(), {
+      logDate: '2027-03-15',
+      notes: '',
+      entries: [hours('Ana', 'rockPlacing', day1)],
+      baseRevision: 0,
+    }).expect(201);
+    await putLog(crewLead, job.id, randomUUID(), {
+      logDate: '2027-03-16',
+      notes: '',
+      entries: [hours('Ana', 'rockPlacing', day2)],
+      baseRevision: 0,
+    }).expect(201);
+
+    await testApp
+      .http()
+      .get(`/api/jobs/${job.id}/report`)
+      .set(...bearer(crewLead))
+      .expect(403);
+    const report = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}/report`)
+        .set(...bearer(estimator))
+        .expect(200)
+    ).body as { labor: Array<{ task: string; actualHours: string; actualCost: string }> };
+    const rockRow = report.labor.find((row) => row.task === 'rockPlacing')!;
+    // Actual cost = logged hours × the quoted unit cost of the rock-placing line, to the cent.
+    const loggedHours = Number(day1) + Number(day2);
+    expect(Number(rockRow.actualHours)).toBeCloseTo(loggedHours, 2);
+    expect(cents(rockRow.actualCost)).toBe(Math.round(loggedHours * Number(rock.unitCost) * 100));
+    const csv = await testApp
+      .http()
+      .get(`/api/jobs/${job.id}/report.csv`)
+      .set(...bearer(owner))
+      .expect(200);
+    expect(csv.headers['content-type']).toMatch(/text\/csv/);
+    expect(csv.text.split('\r\n')[0]).toMatch(/^section,item,unit/);
+
+    // Nothing is learned until the job is closed.
+    const before = (
+      await testApp
+        .http()
+        .get('/api/learned-rates')
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as Array<{
+      parameter: string;
+      jobs: number;
+      learnedValue: number | null;
+      bookValue: number;
+    }>;
+    expect(before.every((rate) => rate.jobs === 0)).toBe(true);
+    for (const status of ['in_progress', 'completed', 'closed']) {
+      await testApp
+        .http()
+        .post(`/api/jobs/${job.id}/status`)
+        .set(...bearer(owner))
+        .send({ status })
+        .expect(200);
+    }
+    const after = (
+      await testApp
+        .http()
+        .get('/api/learned-rates')
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as typeof before;
+    const machine = budget.lines.some((line) => line.source === 'equipment:excavation');
+    const boulders = after.find(
+      (rate) =>
+        rate.parameter ===
+        (machine ? 'boulderMachineLaborHoursPerShortTon' : 'boulderHandLaborHoursPerShortTon'),
+    )!;
+    // Ratio = logged ÷ quoted ≈ 1.5 (the two days were rounded to cents of an hour).
+    const ratio = loggedHours / quotedRockHours;
+    expect(boulders.jobs).toBe(1);
+    expect(boulders.learnedValue).toBe(Number((boulders.bookValue * ratio).toPrecision(3)));
+
+    await testApp
+      .http()
+      .post('/api/learned-rates/adopt')
+      .set(...bearer(estimator))
+      .send({ parameter: boulders.parameter })
+      .expect(403);
+    const adopted = await testApp
+      .http()
+      .post('/api/learned-rates/adopt')
+      .set(...bearer(owner))
+      .send({ parameter: boulders.parameter })
+      .expect(201);
+    expect(adopted.body.note).toMatch(/Adopted the crew/);
+    const book = (
+      await testApp
+        .http()
+        .get('/api/price-book')
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as {
+      book: { productionRates: Record<string, number> };
+    };
+    expect(book.book.productionRates[boulders.parameter]).toBe(boulders.learnedValue);
+    const nothing = await testApp
+      .http()
+      .post('/api/learned-rates/adopt')
+      .set(...bearer(owner))
+      .send({ parameter: 'fixtureLaborHoursEach' })
+      .expect(409);
+    expect(nothing.body.code).toBe('NOTHING_LEARNED');
+  });
+});

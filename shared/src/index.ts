@@ -9,3 +9,4 @@ export * from './quotes/quote-totals';
 export * from './jobs/job-schemas';
 export * from './jobs/job-cost-report';
 export * from './jobs/job-report-csv';
+export * from './jobs/learned-rates';

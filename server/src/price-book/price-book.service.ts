@@ -140,6 +140,26 @@ export class PriceBookService {
     });
   }
 
+  /** A new version, effective today, that changes one production rate (a learned rate adopted). */
+  async adoptProductionRate(
+    parameter: keyof PriceBook['productionRates'],
+    value: number,
+    note: string,
+    authorId: string,
+  ): Promise<PriceBookVersionView> {
+    const effectiveDate = todayIsoDate();
+    const base = await this.versionInForceOn(effectiveDate);
+    if (!base) throw new AppError('PRICE_BOOK_NOT_FOUND', NO_PRICE_BOOK);
+    return this.append(authorId, {
+      book: {
+        ...base.content,
+        productionRates: { ...base.content.productionRates, [parameter]: value },
+      },
+      effectiveDate,
+      note,
+    });
+  }
+
   async exportCsv(): Promise<{ filename: string; csv: string }> {
     const version = await this.currentVersion();
     return {

@@ -248,3 +248,24 @@ export type PhotoView = {
   imagePath: string;
   thumbnailPath: string;
 };
+
+/** `POST /api/learned-rates/adopt`: put one learned rate into a new price-book version. */
+export const adoptLearnedRateRequestSchema = z
+  .object({
+    parameter: z.enum(
+      [
+        'machineBankCuYdPerHour',
+        'boulderHandLaborHoursPerShortTon',
+        'boulderMachineLaborHoursPerShortTon',
+        'gravelLaborHoursPerShortTon',
+        'linerLaborHoursPer100SqFt',
+        'pipeLaborHoursPerFt',
+        'fittingLaborHoursEach',
+        'pumpSetLaborHours',
+        'fixtureLaborHoursEach',
+        'cableLaborHoursPerFt',
+      ],
+      { error: 'Choose a production rate' },
+    ),
+  })
+  .strict();

@@ -46,6 +46,7 @@ export const ERROR_STATUS = {
   PHOTO_NOT_AN_IMAGE: HttpStatus.BAD_REQUEST,
   PHOTO_TOO_LARGE: HttpStatus.PAYLOAD_TOO_LARGE,
   PHOTO_ID_TAKEN: HttpStatus.CONFLICT,
+  NOTHING_LEARNED: HttpStatus.CONFLICT,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
