@@ -20,6 +20,7 @@ import { EstimatesModule } from './estimates/estimates.module';
 import { HealthModule } from './health/health.module';
 import { CrewsModule } from './crews/crews.module';
 import { InvitesModule } from './invites/invites.module';
+import { InvoicesModule } from './invoices/invoices.module';
 import { JobsModule } from './jobs/jobs.module';
 import { PhotosModule } from './photos/photos.module';
 import { MailModule } from './mail/mail.module';
@@ -82,6 +83,7 @@ import { UsersModule } from './users/users.module';
     CrewsModule,
     JobsModule,
     PhotosModule,
+    InvoicesModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     // `/q/<token>` is the homeowner's quote page, quote.html, served by QuotePageHostModule.
     ServeStaticModule.forRootAsync({

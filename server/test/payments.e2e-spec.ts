@@ -198,3 +198,85 @@ describe('deposit payment', () => {
     expect(await depositEvents(estimate.id)).toHaveLength(1);
   });
 });
+
+describe('the final invoice', () => {
+  it('asks for the total less the deposit, and the balance is paid through the same provider', async () => {
+    const owner = await signupCompany(testApp);
+    const { estimate, token, quote } = await acceptedQuote(owner);
+    await testApp.http().post(`/api/quotes/${token}/checkout`).expect(200);
+    const depositSession = payments.sessions()[0]!;
+    await fetch(`${payments.url}/checkout/${depositSession.id}/pay`, {
+      method: 'POST',
+      redirect: 'manual',
+    });
+
+    const job = (
+      await testApp
+        .http()
+        .post('/api/jobs')
+        .set(...bearer(owner))
+        .send({ estimateId: estimate.id })
+        .expect(201)
+    ).body as { id: string; budget: { total: string } };
+    const invoiceEarly = await testApp
+      .http()
+      .post(`/api/jobs/${job.id}/invoice`)
+      .set(...bearer(owner))
+      .send({})
+      .expect(409);
+    expect(invoiceEarly.body.code).toBe('JOB_NOT_COMPLETE');
+    for (const status of ['in_progress', 'completed']) {
+      await testApp
+        .http()
+        .post(`/api/jobs/${job.id}/status`)
+        .set(...bearer(owner))
+        .send({ status })
+        .expect(200);
+    }
+
+    const invoice = (
+      await testApp
+        .http()
+        .post(`/api/jobs/${job.id}/invoice`)
+        .set(...bearer(owner))
+        .send({})
+        .expect(201)
+    ).body as { total: string; depositPaid: string; balance: string; status: string };
+    // Balance = accepted total − deposit paid (no options chosen, so the job's total is the quote's).
+    expect(invoice.total).toBe(quote.acceptance!.total);
+    expect(invoice.depositPaid).toBe(quote.acceptance!.deposit);
+    expect(Math.round(Number(invoice.balance) * 100)).toBe(
+      Math.round(Number(invoice.total) * 100) - Math.round(Number(invoice.depositPaid) * 100),
+    );
+
+    await outbox.drain();
+    const mail = smtp.messages().find((m) => m.subject.startsWith('Your final invoice'))!;
+    const invoiceToken = tokenFromMail(mail.text);
+    const shown = (await testApp.http().get(`/api/quotes/${invoiceToken}`).expect(200))
+      .body as QuoteView;
+    expect(shown.invoice).toMatchObject({ balance: invoice.balance, status: 'open' });
+
+    const checkout = await testApp.http().post(`/api/quotes/${invoiceToken}/checkout`).expect(200);
+    const session = payments.sessions()[0]!;
+    expect(checkout.body.url).toContain(session.id);
+    expect(session.amount_total).toBe(Math.round(Number(invoice.balance) * 100));
+    await fetch(`${payments.url}/checkout/${session.id}/pay`, {
+      method: 'POST',
+      redirect: 'manual',
+    });
+
+    const paid = (await testApp.http().get(`/api/quotes/${invoiceToken}`).expect(200))
+      .body as QuoteView;
+    expect(paid.invoice).toMatchObject({ status: 'paid' });
+    expect(paid.invoice!.paidAt).toBeTruthy();
+    const again = await testApp.http().post(`/api/quotes/${invoiceToken}/checkout`).expect(409);
+    expect(again.body.code).toBe('DEPOSIT_ALREADY_PAID');
+    const resend = await testApp
+      .http()
+      .post(`/api/jobs/${job.id}/invoice`)
+      .set(...bearer(owner))
+      .send({})
+      .expect(409);
+    expect(resend.body.code).toBe('INVOICE_PAID');
+  });
+});

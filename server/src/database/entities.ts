@@ -10,6 +10,7 @@ import { EstimateEvent } from '../estimates/entities/estimate-event.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { Invite } from '../invites/entities/invite.entity';
+import { Invoice } from '../invoices/entities/invoice.entity';
 import { JobLog } from '../jobs/entities/job-log.entity';
 import { JobScheduleChange } from '../jobs/entities/job-schedule-change.entity';
 import { Job } from '../jobs/entities/job.entity';
@@ -50,4 +51,5 @@ export const entities = [
   JobScheduleChange,
   JobLog,
   JobPhoto,
+  Invoice,
 ];

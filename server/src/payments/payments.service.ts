@@ -15,6 +15,7 @@ import { depositReceiptMail } from '../quotes/quote-mail';
 import { User } from '../users/entities/user.entity';
 import { PaymentEvent } from './entities/payment-event.entity';
 import { Payment } from './entities/payment.entity';
+import { Invoice } from '../invoices/entities/invoice.entity';
 import { STRIPE_CLIENT } from './stripe-client';
 import { moneyToMinorUnits } from './minor-units';
 
@@ -45,16 +46,53 @@ export class PaymentsService {
   /** Creates a checkout session for the accepted quote's deposit and records it as pending. */
   async createDepositCheckout(checkout: DepositCheckout): Promise<string> {
     const { acceptance } = checkout;
-    const paid = await this.dataSource.manager.existsBy(Payment, {
-      estimateId: acceptance.estimateId,
+    await this.refuseIfPaid(
+      acceptance.estimateId,
+      'deposit',
+      'The deposit for this quote is already paid.',
+    );
+    return this.createCheckout({
+      ...checkout,
       purpose: 'deposit',
+      amount: acceptance.deposit,
+      invoice: null,
+    });
+  }
+
+  /** Creates a checkout session for the final invoice's balance. */
+  async createBalanceCheckout(checkout: DepositCheckout & { invoice: Invoice }): Promise<string> {
+    await this.refuseIfPaid(
+      checkout.acceptance.estimateId,
+      'balance',
+      'This invoice is already paid. Thank you!',
+    );
+    return this.createCheckout({
+      ...checkout,
+      purpose: 'balance',
+      amount: checkout.invoice.balance,
+    });
+  }
+
+  private async refuseIfPaid(estimateId: string, purpose: Payment['purpose'], message: string) {
+    const paid = await this.dataSource.manager.existsBy(Payment, {
+      estimateId,
+      purpose,
       status: 'paid',
     });
-    if (paid)
-      throw new AppError('DEPOSIT_ALREADY_PAID', 'The deposit for this quote is already paid.');
-    const amountMinor = moneyToMinorUnits(acceptance.deposit);
+    if (paid) throw new AppError('DEPOSIT_ALREADY_PAID', message);
+  }
+
+  private async createCheckout(
+    checkout: DepositCheckout & {
+      purpose: Payment['purpose'];
+      amount: string;
+      invoice: Invoice | null;
+    },
+  ): Promise<string> {
+    const { acceptance } = checkout;
+    const amountMinor = moneyToMinorUnits(checkout.amount);
     if (amountMinor <= 0) {
-      throw new AppError('DEPOSIT_ALREADY_PAID', 'This quote asks for no deposit.');
+      throw new AppError('DEPOSIT_ALREADY_PAID', 'Nothing is due on this quote.');
     }
     let session: Stripe.Checkout.Session;
     try {
@@ -75,7 +113,7 @@ export class PaymentsService {
         metadata: {
           estimateId: acceptance.estimateId,
           acceptanceId: acceptance.id,
-          purpose: 'deposit',
+          purpose: checkout.purpose,
         },
         success_url: `${checkout.returnUrl}?payment=success`,
         cancel_url: `${checkout.returnUrl}?payment=cancelled`,
@@ -99,10 +137,11 @@ export class PaymentsService {
       companyId: acceptance.companyId,
       estimateId: acceptance.estimateId,
       acceptanceId: acceptance.id,
-      purpose: 'deposit',
+      purpose: checkout.purpose,
+      invoiceId: checkout.invoice?.id ?? null,
       provider: PROVIDER,
       checkoutSessionId: session.id,
-      amount: acceptance.deposit,
+      amount: checkout.amount,
       currency: checkout.currency.toUpperCase(),
       status: 'pending',
     });
@@ -171,7 +210,7 @@ export class PaymentsService {
     const received = session.amount_total ?? -1;
     const alreadyPaid = await manager.existsBy(Payment, {
       estimateId: payment.estimateId,
-      purpose: 'deposit',
+      purpose: payment.purpose,
       status: 'paid',
     });
     if (received !== moneyToMinorUnits(payment.amount) || alreadyPaid) {
@@ -181,7 +220,7 @@ export class PaymentsService {
         companyId: payment.companyId,
         estimateId: payment.estimateId,
         actorLabel: PAYMENT_PROVIDER,
-        action: 'deposit-needs-review',
+        action: `${payment.purpose}-needs-review`,
         detail: {
           checkoutSessionId: session.id,
           amountReceivedMinor: received,
@@ -200,11 +239,14 @@ export class PaymentsService {
       { id: payment.id },
       { status: 'paid', paidAt, providerPaymentRef: reference },
     );
+    if (payment.invoiceId) {
+      await manager.update(Invoice, { id: payment.invoiceId }, { status: 'paid', paidAt });
+    }
     await recordEstimateEvent(manager, {
       companyId: payment.companyId,
       estimateId: payment.estimateId,
       actorLabel: PAYMENT_PROVIDER,
-      action: 'deposit-paid',
+      action: `${payment.purpose}-paid`,
       detail: { amount: payment.amount, currency: payment.currency, reference },
     });
     await this.queueReceipts(manager, estimate, payment, paidAt, reference);
@@ -226,6 +268,7 @@ export class PaymentsService {
     ]);
     const sender = await manager.findOneByOrFail(User, { id: link.createdById });
     const common = {
+      purpose: payment.purpose,
       companyName: company.name,
       customerName: acceptance.fullName,
       estimateNumber: estimate.number,
@@ -237,7 +280,7 @@ export class PaymentsService {
     };
     await this.outbox.enqueue(manager, {
       companyId: estimate.companyId,
-      kind: 'deposit-receipt',
+      kind: `${payment.purpose}-receipt`,
       to: link.recipientEmail,
       replyTo: sender.email,
       ...depositReceiptMail({
@@ -248,7 +291,7 @@ export class PaymentsService {
     });
     await this.outbox.enqueue(manager, {
       companyId: estimate.companyId,
-      kind: 'deposit-receipt-company',
+      kind: `${payment.purpose}-receipt-company`,
       to: sender.email,
       ...depositReceiptMail({
         ...common,

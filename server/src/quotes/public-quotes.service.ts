@@ -19,6 +19,8 @@ import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { fieldErrors } from '../estimates/field-errors';
 import { OutboxService } from '../mail/outbox.service';
+import { Invoice } from '../invoices/entities/invoice.entity';
+import { invoiceView } from '../invoices/invoice-view';
 import { PaymentsService } from '../payments/payments.service';
 import { User } from '../users/entities/user.entity';
 import { QuoteAcceptance } from './entities/quote-acceptance.entity';
@@ -224,11 +226,15 @@ export class PublicQuotesService {
     return this.view(token, meta);
   }
 
-  /** The hosted checkout for the deposit, once accepted through this link. */
+  /**
+   * The hosted checkout: for the deposit once accepted through this link, or for the balance when the
+   * link carries the final invoice.
+   */
   async checkout(token: string): Promise<{ url: string }> {
     const manager = this.dataSource.manager;
     const link = await this.usableLink(manager, token);
     const acceptance = await manager.findOneBy(QuoteAcceptance, { estimateId: link.estimateId });
+    if (acceptance && link.invoiceId) return this.balanceCheckout(token, link, acceptance);
     if (!acceptance || acceptance.linkId !== link.id) {
       throw new AppError('QUOTE_NOT_ACCEPTED', 'Accept the quote first; the deposit follows.');
     }
@@ -261,6 +267,29 @@ export class PublicQuotesService {
       }
       throw error;
     }
+  }
+
+  private async balanceCheckout(
+    token: string,
+    link: QuoteLink,
+    acceptance: QuoteAcceptance,
+  ): Promise<{ url: string }> {
+    const manager = this.dataSource.manager;
+    const [invoice, estimate, version, company] = await Promise.all([
+      manager.findOneByOrFail(Invoice, { id: link.invoiceId! }),
+      manager.findOneByOrFail(Estimate, { id: link.estimateId }),
+      manager.findOneByOrFail(EstimateVersion, { id: link.versionId }),
+      manager.findOneByOrFail(Company, { id: link.companyId }),
+    ]);
+    const url = await this.payments.createBalanceCheckout({
+      acceptance,
+      invoice,
+      currency: version.computed.priced.currency,
+      description: `Balance for job No. ${estimate.number} from ${company.name}`,
+      customerEmail: link.recipientEmail,
+      returnUrl: `${this.config.publicAppUrl}/q/${token}`,
+    });
+    return { url };
   }
 
   async pdf(token: string): Promise<{ filename: string; bytes: Buffer }> {
@@ -369,7 +398,12 @@ export class PublicQuotesService {
       version.content.siteId ? manager.findOneBy(Site, { id: version.content.siteId }) : null,
       manager.findOneByOrFail(User, { id: link.createdById }),
     ]);
-    const acceptance = records.acceptance?.linkId === link.id ? records.acceptance : null;
+    // An invoice link comes after the acceptance (made through the quote's own link) and shows it.
+    const acceptance =
+      records.acceptance?.linkId === link.id || link.invoiceId ? records.acceptance : null;
+    const invoice = link.invoiceId
+      ? await manager.findOneByOrFail(Invoice, { id: link.invoiceId })
+      : null;
     const decline = records.decline?.linkId === link.id ? records.decline : null;
     return buildQuoteView({
       companyName: company.name,
@@ -385,6 +419,7 @@ export class PublicQuotesService {
       acceptance: acceptance ? acceptanceView(acceptance) : null,
       payment: acceptance && records.payment ? paymentView(records.payment) : null,
       declinedAt: decline?.declinedAt ?? null,
+      invoice: invoice ? invoiceView(invoice) : null,
     });
   }
 }

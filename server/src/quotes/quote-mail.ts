@@ -84,6 +84,8 @@ export function quoteAnsweredStaffMail(args: {
 
 export function depositReceiptMail(args: {
   audience: 'homeowner' | 'company';
+  /** What was paid: the deposit on acceptance, or the balance of the final invoice. */
+  purpose: 'deposit' | 'balance';
   companyName: string;
   customerName: string;
   estimateNumber: number;
@@ -99,9 +101,12 @@ export function depositReceiptMail(args: {
   const when = args.paidAt.toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
   if (args.audience === 'homeowner') {
     return composeMail(
-      `Receipt: deposit of ${paid} to ${args.companyName}`,
+      `Receipt: ${args.purpose} of ${paid} to ${args.companyName}`,
       [
-        { kind: 'paragraph', text: `Thank you, ${args.customerName}. We received your deposit.` },
+        {
+          kind: 'paragraph',
+          text: `Thank you, ${args.customerName}. We received your ${args.purpose === 'deposit' ? 'deposit' : 'final payment'}.`,
+        },
         {
           kind: 'paragraph',
           text: `Amount: ${paid}\nFor: ${args.title} (quote No. ${args.estimateNumber})\nPaid: ${when}\nReference: ${args.reference}`,
@@ -115,11 +120,11 @@ export function depositReceiptMail(args: {
     );
   }
   return composeMail(
-    `Deposit received: ${paid} for estimate ${args.estimateNumber}`,
+    `${args.purpose === 'deposit' ? 'Deposit' : 'Balance'} received: ${paid} for estimate ${args.estimateNumber}`,
     [
       {
         kind: 'paragraph',
-        text: `${args.customerName} paid the deposit of ${paid} for "${args.title}" on ${when}. Reference: ${args.reference}.`,
+        text: `${args.customerName} paid the ${args.purpose} of ${paid} for "${args.title}" on ${when}. Reference: ${args.reference}.`,
       },
       ...(args.url ? [{ kind: 'button' as const, label: 'Open the estimate', url: args.url }] : []),
     ],

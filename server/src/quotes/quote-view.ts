@@ -2,6 +2,7 @@ import {
   type EstimateComputed,
   type EstimateContent,
   type QuoteAcceptanceView,
+  type QuoteInvoiceView,
   type QuotePaymentView,
   type QuoteView,
 } from '@pondwright/shared';
@@ -30,6 +31,7 @@ export type QuoteViewSource = {
   acceptance: QuoteAcceptanceView | null;
   payment: QuotePaymentView | null;
   declinedAt: Date | null;
+  invoice: QuoteInvoiceView | null;
 };
 
 /**
@@ -88,6 +90,7 @@ export function buildQuoteView(source: QuoteViewSource): QuoteView {
     acceptance: source.acceptance,
     payment: source.payment,
     declinedAt: source.declinedAt?.toISOString() ?? null,
+    invoice: source.invoice,
   };
 }
 

@@ -269,3 +269,21 @@ export const adoptLearnedRateRequestSchema = z
     ),
   })
   .strict();
+
+/** `POST /api/jobs/:id/invoice`: the final invoice to the homeowner (the quote's recipient by default). */
+export const sendInvoiceRequestSchema = z
+  .object({
+    recipientEmail: z.email({ error: 'Enter the homeowner’s e-mail address' }).max(254).optional(),
+  })
+  .strict();
+
+export type InvoiceView = {
+  id: string;
+  total: string;
+  depositPaid: string;
+  balance: string;
+  status: 'open' | 'paid';
+  issuedAt: string;
+  paidAt: string | null;
+  recipientEmail: string;
+};

@@ -109,6 +109,19 @@ export type QuoteView = {
   acceptance: QuoteAcceptanceView | null;
   payment: QuotePaymentView | null;
   declinedAt: string | null;
+  /** Set when the link was sent with the job's final invoice: the balance is paid from the page. */
+  invoice: QuoteInvoiceView | null;
+};
+
+/** The job's final invoice as the homeowner sees it. */
+export type QuoteInvoiceView = {
+  issuedAt: string;
+  /** The accepted total (with options and accepted change orders). */
+  total: string;
+  depositPaid: string;
+  balance: string;
+  status: 'open' | 'paid';
+  paidAt: string | null;
 };
 
 /** A quote link as staff see it (never the token itself, which is only ever e-mailed). */

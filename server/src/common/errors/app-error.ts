@@ -47,6 +47,8 @@ export const ERROR_STATUS = {
   PHOTO_TOO_LARGE: HttpStatus.PAYLOAD_TOO_LARGE,
   PHOTO_ID_TAKEN: HttpStatus.CONFLICT,
   NOTHING_LEARNED: HttpStatus.CONFLICT,
+  JOB_NOT_COMPLETE: HttpStatus.CONFLICT,
+  INVOICE_PAID: HttpStatus.CONFLICT,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;

@@ -7,6 +7,7 @@ import { Estimates1796101200000 } from './1796101200000-estimates';
 import { QuotesPaymentsOutbox1796104800000 } from './1796104800000-quotes-payments-outbox';
 import { Jobs1796108400000 } from './1796108400000-jobs';
 import { JobPhotos1796112000000 } from './1796112000000-job-photos';
+import { Invoices1796115600000 } from './1796115600000-invoices';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   QuotesPaymentsOutbox1796104800000,
   Jobs1796108400000,
   JobPhotos1796112000000,
+  Invoices1796115600000,
 ];

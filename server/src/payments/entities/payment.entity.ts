@@ -17,7 +17,11 @@ export class Payment implements CompanyOwned {
   acceptanceId: string;
 
   @Column({ type: 'text' })
-  purpose: 'deposit';
+  purpose: 'deposit' | 'balance';
+
+  /** The final invoice a balance payment settles; null for the deposit. */
+  @Column({ name: 'invoice_id', type: 'uuid', nullable: true })
+  invoiceId: string | null;
 
   @Column({ type: 'text' })
   provider: string;

@@ -44,6 +44,10 @@ export class QuoteLink implements CompanyOwned {
   @Column({ name: 'first_viewed_at', type: 'timestamptz', nullable: true })
   firstViewedAt: Date | null;
 
+  /** Set when the link carries the job's final invoice rather than the quote. */
+  @Column({ name: 'invoice_id', type: 'uuid', nullable: true })
+  invoiceId: string | null;
+
   @Column({ name: 'created_by', type: 'uuid' })
   createdById: string;
 

@@ -122,6 +122,7 @@ export function demoQuoteView(overrides: Partial<QuoteView> = {}): QuoteView {
     acceptance: null,
     payment: null,
     declinedAt: null,
+    invoice: null,
     ...overrides,
   };
 }
