@@ -20,6 +20,7 @@ import { EstimatesModule } from './estimates/estimates.module';
 import { HealthModule } from './health/health.module';
 import { CrewsModule } from './crews/crews.module';
 import { InvitesModule } from './invites/invites.module';
+import { ChangeOrdersModule } from './change-orders/change-orders.module';
 import { InvoicesModule } from './invoices/invoices.module';
 import { JobsModule } from './jobs/jobs.module';
 import { PhotosModule } from './photos/photos.module';
@@ -84,6 +85,7 @@ import { UsersModule } from './users/users.module';
     JobsModule,
     PhotosModule,
     InvoicesModule,
+    ChangeOrdersModule,
     // The built client, served at `/` when it exists (npm start builds it; tests and `npm run dev` don't).
     // `/q/<token>` is the homeowner's quote page, quote.html, served by QuotePageHostModule.
     ServeStaticModule.forRootAsync({

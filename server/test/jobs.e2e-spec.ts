@@ -452,3 +452,170 @@ describe('the cost report and learned rates', () => {
     expect(nothing.body.code).toBe('NOTHING_LEARNED');
   });
 });
+
+describe('change orders', () => {
+  it('are the estimate’s next version, accepted by the homeowner by link; only then does the budget grow', async () => {
+    const owner = await signupCompany(testApp);
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const { job, estimate } = await makeJob(owner);
+    const line = {
+      id: 'wall',
+      category: 'materials',
+      description: 'Dry-stone retaining wall behind the waterfall',
+      quantity: '12',
+      unit: 'ft',
+      unitCost: '45.00',
+      taxable: true,
+    };
+    const create = (session: Session, body: object) =>
+      testApp
+        .http()
+        .post(`/api/jobs/${job.id}/change-orders`)
+        .set(...bearer(session))
+        .send(body);
+
+    await create(crewLead, { title: 'Retaining wall', lines: [line] }).expect(403);
+    const bad = await create(owner, { title: 'Retaining wall', lines: [] }).expect(400);
+    expect(bad.body.details[0].field).toBe('lines');
+    const order = (
+      await create(owner, {
+        title: 'Retaining wall',
+        reason: 'The bank behind the falls is looser than it looked.',
+        lines: [line],
+      }).expect(201)
+    ).body as {
+      id: string;
+      total: string;
+      tax: string;
+      priceBeforeTax: string;
+      newJobTotal: string;
+      previousJobTotal: string;
+      versionNumber: number;
+      lines: Array<{ price: string }>;
+    };
+    // 12 ft × 45.00 = 540.00 cost; its price is the line's price, taxed at the book's rate.
+    expect(order.versionNumber).toBe(estimate.versions.length + 1);
+    expect(order.previousJobTotal).toBe(job.budget!.total);
+    expect(cents(order.newJobTotal)).toBe(cents(job.budget!.total) + cents(order.total));
+    expect(cents(order.total)).toBe(cents(order.priceBeforeTax) + cents(order.tax));
+
+    // Not in the budget until accepted.
+    const unchanged = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}`)
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as JobView;
+    expect(unchanged.budget!.total).toBe(job.budget!.total);
+
+    await testApp
+      .http()
+      .post(`/api/jobs/${job.id}/change-orders/${order.id}/send`)
+      .set(...bearer(owner))
+      .send({})
+      .expect(200);
+    const [mail] = (await testApp.dataSource.query(
+      `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'change-order-sent'`,
+      [owner.companyId],
+    )) as Array<{ text_body: string }>;
+    const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(mail!.text_body)![1]!;
+    const shown = (await testApp.http().get(`/api/quotes/${token}`).expect(200)).body as {
+      changeOrder: { title: string; total: string; state: string };
+      estimate: { contentSha256: string };
+    };
+    expect(shown.changeOrder).toMatchObject({
+      title: 'Retaining wall',
+      total: order.total,
+      state: 'open',
+    });
+
+    await testApp
+      .http()
+      .post(`/api/quotes/${token}/accept`)
+      .send({
+        fullName: 'Wren Halloway',
+        consent: true,
+        optionIds: [],
+        contentSha256: shown.estimate.contentSha256,
+      })
+      .expect(200);
+    const grown = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}`)
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as JobView;
+    expect(grown.budget!.total).toBe(order.newJobTotal);
+    expect(cents(grown.budget!.cost)).toBe(cents(job.budget!.cost) + 54000);
+    expect(grown.budget!.lines.map((l) => l.description)).toContain(line.description);
+    const again = await testApp
+      .http()
+      .post(`/api/quotes/${token}/accept`)
+      .send({
+        fullName: 'Wren Halloway',
+        consent: true,
+        optionIds: [],
+        contentSha256: shown.estimate.contentSha256,
+      })
+      .expect(409);
+    expect(again.body.code).toBe('QUOTE_ALREADY_ANSWERED');
+
+    // The next change is priced on top of the accepted one; declining it leaves the budget alone.
+    const second = (
+      await create(owner, {
+        title: 'Extra lights',
+        lines: [{ ...line, id: 'lights', description: 'Two more uplights' }],
+      }).expect(201)
+    ).body as { id: string; previousJobTotal: string };
+    expect(second.previousJobTotal).toBe(order.newJobTotal);
+    await testApp
+      .http()
+      .post(`/api/jobs/${job.id}/change-orders/${second.id}/send`)
+      .set(...bearer(owner))
+      .send({})
+      .expect(200);
+    const [secondMail] = (await testApp.dataSource.query(
+      `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'change-order-sent' ORDER BY created_at DESC LIMIT 1`,
+      [owner.companyId],
+    )) as Array<{ text_body: string }>;
+    const secondToken = /\/q\/([A-Za-z0-9_-]{43})/.exec(secondMail!.text_body)![1]!;
+    await testApp
+      .http()
+      .post(`/api/quotes/${secondToken}/decline`)
+      .send({ reason: 'Not this year' })
+      .expect(200);
+    const after = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}`)
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as JobView;
+    expect(after.budget!.total).toBe(order.newJobTotal);
+    await testApp
+      .http()
+      .get(`/api/jobs/${job.id}/change-orders`)
+      .set(...bearer(crewLead))
+      .expect(403);
+    const listed = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}/change-orders`)
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as Array<{ status: string; cost: string | null }>;
+    expect(listed.map((o) => o.status)).toEqual(['accepted', 'declined']);
+    expect(listed[0]!.cost).toBe('540.00');
+    // The crew builds the accepted change from its budget, without prices.
+    const crewView = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}`)
+        .set(...bearer(crewLead))
+        .expect(200)
+    ).body as JobView;
+    expect(crewView.crewBudget.map((l) => l.description)).toContain(line.description);
+  });
+});

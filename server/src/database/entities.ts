@@ -1,3 +1,4 @@
+import { ChangeOrder } from '../change-orders/entities/change-order.entity';
 import { LoginFailure } from '../auth/entities/login-failure.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { CompanyLogo } from '../companies/entities/company-logo.entity';
@@ -52,4 +53,5 @@ export const entities = [
   JobLog,
   JobPhoto,
   Invoice,
+  ChangeOrder,
 ];

@@ -19,6 +19,8 @@ import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { fieldErrors } from '../estimates/field-errors';
 import { OutboxService } from '../mail/outbox.service';
+import { ChangeOrderAnswers } from '../change-orders/change-order-answers';
+import { ChangeOrder } from '../change-orders/entities/change-order.entity';
 import { Invoice } from '../invoices/entities/invoice.entity';
 import { invoiceView } from '../invoices/invoice-view';
 import { PaymentsService } from '../payments/payments.service';
@@ -49,6 +51,7 @@ export class PublicQuotesService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly outbox: OutboxService,
     private readonly payments: PaymentsService,
+    private readonly changeOrders: ChangeOrderAnswers,
     private readonly config: AppConfig,
   ) {}
 
@@ -87,6 +90,10 @@ export class PublicQuotesService {
     const request = parseBody(acceptQuoteRequestSchema, body);
     await this.dataSource.transaction(async (manager) => {
       const link = await this.usableLink(manager, token);
+      if (link.changeOrderId) {
+        await this.changeOrders.answer(manager, link, { accepted: true, request, meta });
+        return;
+      }
       const estimate = await this.lockAnswerable(manager, link);
       const version = await manager.findOneByOrFail(EstimateVersion, { id: link.versionId });
       if (request.contentSha256 !== version.contentSha256) {
@@ -185,6 +192,14 @@ export class PublicQuotesService {
     const request = parseBody(declineQuoteRequestSchema, body);
     await this.dataSource.transaction(async (manager) => {
       const link = await this.usableLink(manager, token);
+      if (link.changeOrderId) {
+        await this.changeOrders.answer(manager, link, {
+          accepted: false,
+          reason: request.reason,
+          meta,
+        });
+        return;
+      }
       const estimate = await this.lockAnswerable(manager, link);
       const reason = request.reason || null;
       await manager.save(
@@ -400,7 +415,12 @@ export class PublicQuotesService {
     ]);
     // An invoice link comes after the acceptance (made through the quote's own link) and shows it.
     const acceptance =
-      records.acceptance?.linkId === link.id || link.invoiceId ? records.acceptance : null;
+      records.acceptance?.linkId === link.id || link.invoiceId || link.changeOrderId
+        ? records.acceptance
+        : null;
+    const changeOrder = link.changeOrderId
+      ? await manager.findOneByOrFail(ChangeOrder, { id: link.changeOrderId })
+      : null;
     const invoice = link.invoiceId
       ? await manager.findOneByOrFail(Invoice, { id: link.invoiceId })
       : null;
@@ -420,6 +440,16 @@ export class PublicQuotesService {
       payment: acceptance && records.payment ? paymentView(records.payment) : null,
       declinedAt: decline?.declinedAt ?? null,
       invoice: invoice ? invoiceView(invoice) : null,
+      changeOrder: changeOrder
+        ? {
+            ...changeOrder.summary,
+            state:
+              changeOrder.status === 'accepted' || changeOrder.status === 'declined'
+                ? changeOrder.status
+                : 'open',
+            acceptedAt: changeOrder.acceptedAt?.toISOString() ?? null,
+          }
+        : null,
     });
   }
 }

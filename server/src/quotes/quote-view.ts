@@ -32,6 +32,7 @@ export type QuoteViewSource = {
   payment: QuotePaymentView | null;
   declinedAt: Date | null;
   invoice: QuoteInvoiceView | null;
+  changeOrder: QuoteView['changeOrder'];
 };
 
 /**
@@ -91,6 +92,7 @@ export function buildQuoteView(source: QuoteViewSource): QuoteView {
     payment: source.payment,
     declinedAt: source.declinedAt?.toISOString() ?? null,
     invoice: source.invoice,
+    changeOrder: source.changeOrder,
   };
 }
 

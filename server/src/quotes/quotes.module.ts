@@ -2,6 +2,7 @@ import { Module, type OnModuleInit } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { MailAttachments } from '../mail/mail-attachments';
+import { ChangeOrderAnswers } from '../change-orders/change-order-answers';
 import { PaymentsModule } from '../payments/payments.module';
 import { QuoteLink } from './entities/quote-link.entity';
 import { EstimateQuoteController } from './estimate-quote.controller';
@@ -14,7 +15,13 @@ import { StaffQuotePdfService } from './staff-quote-pdf.service';
 @Module({
   imports: [PaymentsModule],
   controllers: [EstimateQuoteController, PublicQuotesController],
-  providers: [QuoteLinksService, PublicQuotesService, StaffQuotePdfService, QuoteExpiryService],
+  providers: [
+    QuoteLinksService,
+    PublicQuotesService,
+    StaffQuotePdfService,
+    QuoteExpiryService,
+    ChangeOrderAnswers,
+  ],
   exports: [PublicQuotesService],
 })
 export class QuotesModule implements OnModuleInit {

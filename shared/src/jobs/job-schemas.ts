@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { LABOR_TASKS, type LaborTask } from '../engine/labor/labor-hours';
 import type { PriceCategory } from '../pricing/price-book-schema';
+import { manualLineSchema } from '../estimates/estimate-schemas';
 
 /**
  * Jobs: an accepted quote becomes a job carrying its budget; the crew lead's daily logs record what
@@ -286,4 +287,57 @@ export type InvoiceView = {
   issuedAt: string;
   paidAt: string | null;
   recipientEmail: string;
+};
+
+/**
+ * `POST /api/jobs/:id/change-orders`: a scope change, priced like manual lines with the accepted
+ * version's price book; it becomes the estimate's next version and is sent for the homeowner to accept.
+ */
+export const createChangeOrderRequestSchema = z
+  .object({
+    title: z.string({ error: 'Name the change' }).trim().min(1, 'Name the change').max(160),
+    reason: z.string().trim().max(2000, 'Use at most 2000 characters').default(''),
+    lines: z
+      .array(manualLineSchema.extend({ kind: z.literal('base').default('base') }))
+      .min(1, 'Add at least one line')
+      .max(50, 'Use at most 50 lines')
+      .refine(
+        (lines) => new Set(lines.map((l) => l.id)).size === lines.length,
+        'Each line needs its own id',
+      ),
+  })
+  .strict();
+export type CreateChangeOrderRequest = z.infer<typeof createChangeOrderRequestSchema>;
+
+export const CHANGE_ORDER_STATUSES = ['ready', 'sent', 'accepted', 'declined'] as const;
+export type ChangeOrderStatus = (typeof CHANGE_ORDER_STATUSES)[number];
+
+/** A change order's priced lines and what it adds to the job. */
+export type ChangeOrderSummary = {
+  number: number;
+  title: string;
+  reason: string;
+  lines: Array<{ description: string; quantity: string; unit: string; price: string }>;
+  /** What the change adds before tax, its tax, and the two together. */
+  priceBeforeTax: string;
+  tax: string;
+  total: string;
+  /** The job's total before and after the change (tax included). */
+  previousJobTotal: string;
+  newJobTotal: string;
+};
+
+export type ChangeOrderView = ChangeOrderSummary & {
+  id: string;
+  jobId: string;
+  status: ChangeOrderStatus;
+  versionNumber: number;
+  contentSha256: string;
+  /** Cost of the change's lines (staff only; null for crew leads). */
+  cost: string | null;
+  sentTo: string | null;
+  acceptedByName: string | null;
+  acceptedAt: string | null;
+  declinedAt: string | null;
+  createdAt: string;
 };

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { CrossSection, PlanDrawing } from '../drawings';
+import type { ChangeOrderSummary } from '../jobs/job-schemas';
 
 /**
  * The homeowner's quote: what staff send, what the public quote page shows and what the homeowner
@@ -111,6 +112,13 @@ export type QuoteView = {
   declinedAt: string | null;
   /** Set when the link was sent with the job's final invoice: the balance is paid from the page. */
   invoice: QuoteInvoiceView | null;
+  /**
+   * Set when the link carries a change order: the homeowner accepts or declines the change (with
+   * `contentSha256` of its version); the rest of the view is the whole job after the change.
+   */
+  changeOrder:
+    | (ChangeOrderSummary & { state: 'open' | 'accepted' | 'declined'; acceptedAt: string | null })
+    | null;
 };
 
 /** The job's final invoice as the homeowner sees it. */

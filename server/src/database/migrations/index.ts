@@ -8,6 +8,7 @@ import { QuotesPaymentsOutbox1796104800000 } from './1796104800000-quotes-paymen
 import { Jobs1796108400000 } from './1796108400000-jobs';
 import { JobPhotos1796112000000 } from './1796112000000-job-photos';
 import { Invoices1796115600000 } from './1796115600000-invoices';
+import { ChangeOrders1796119200000 } from './1796119200000-change-orders';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   Jobs1796108400000,
   JobPhotos1796112000000,
   Invoices1796115600000,
+  ChangeOrders1796119200000,
 ];

@@ -48,6 +48,10 @@ export class QuoteLink implements CompanyOwned {
   @Column({ name: 'invoice_id', type: 'uuid', nullable: true })
   invoiceId: string | null;
 
+  /** Set when the link carries a change order for the homeowner to accept. */
+  @Column({ name: 'change_order_id', type: 'uuid', nullable: true })
+  changeOrderId: string | null;
+
   @Column({ name: 'created_by', type: 'uuid' })
   createdById: string;
 

@@ -123,6 +123,7 @@ export function demoQuoteView(overrides: Partial<QuoteView> = {}): QuoteView {
     payment: null,
     declinedAt: null,
     invoice: null,
+    changeOrder: null,
     ...overrides,
   };
 }

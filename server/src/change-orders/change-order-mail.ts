@@ -1,0 +1,26 @@
+import type { ChangeOrderSummary } from '@pondwright/shared';
+import { composeMail, type MailContent } from '../mail/mail-content';
+import { money } from '../quotes/quote-mail';
+
+export function changeOrderMail(args: {
+  companyName: string;
+  customerName: string;
+  jobTitle: string;
+  summary: ChangeOrderSummary;
+  currency: string;
+  url: string;
+}): MailContent {
+  const { summary } = args;
+  return composeMail(
+    `Change order ${summary.number} for "${args.jobTitle}" from ${args.companyName}`,
+    [
+      { kind: 'paragraph', text: `Hello ${args.customerName},` },
+      {
+        kind: 'paragraph',
+        text: `We would like to change the work: ${summary.title}.${summary.reason ? `\n\n${summary.reason}` : ''}\n\nThis adds ${money(summary.total, args.currency)} (tax included), bringing the job to ${money(summary.newJobTotal, args.currency)}. Nothing changes until you accept it.`,
+      },
+      { kind: 'button', label: 'Review the change', url: args.url },
+    ],
+    'Sent with Pondwright on behalf of your contractor. Reply to this e-mail to reach them.',
+  );
+}
