@@ -55,5 +55,28 @@ describe('the demo estimates', () => {
       [accepted.id],
     )) as Array<{ content_sha256: string }>;
     expect(quote.acceptance!.contentSha256).toBe(version!.content_sha256);
+
+    // The accepted quote is a job under way, with two days logged by the crew lead.
+    const estimate = (
+      await testApp
+        .http()
+        .get(`/api/estimates/${accepted.id}`)
+        .set(...bearer(session))
+        .expect(200)
+    ).body as { jobId: string | null };
+    const job = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${estimate.jobId}`)
+        .set(...bearer(session))
+        .expect(200)
+    ).body as { status: string; crewName: string; logs: unknown[] };
+    expect(job).toMatchObject({ status: 'in_progress', crewName: 'Reedbank crew' });
+    expect(job.logs).toHaveLength(2);
+    await testApp
+      .http()
+      .get(`/api/jobs/${estimate.jobId}/report`)
+      .set(...bearer(session))
+      .expect(200);
   });
 });

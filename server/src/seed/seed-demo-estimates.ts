@@ -15,6 +15,7 @@ import { PriceBookVersion } from '../price-book/entities/price-book-version.enti
 import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
 import { QuoteLink } from '../quotes/entities/quote-link.entity';
 import { CONSENT_TEXT } from '../quotes/quote-view';
+import { addDemoJob } from './seed-demo-job';
 
 type DemoEstimate = {
   customer: string;
@@ -137,7 +138,15 @@ export async function addDemoEstimates(
     );
     await event(manager, companyId, estimate.id, estimatorId, 'finalised', { versionNumber: 1 });
     if (demo.status === 'accepted') {
-      await acceptWithPaidDeposit(manager, estimate, version, content, customer, estimatorId);
+      const acceptance = await acceptWithPaidDeposit(
+        manager,
+        estimate,
+        version,
+        content,
+        customer,
+        estimatorId,
+      );
+      await addDemoJob(manager, { estimate, version, acceptance, estimatorId });
     }
   }
   return number;
@@ -151,7 +160,7 @@ async function acceptWithPaidDeposit(
   content: EstimateContent,
   customer: Customer,
   estimatorId: string,
-): Promise<void> {
+): Promise<QuoteAcceptance> {
   const sentAt = new Date(Date.now() - 6 * 86_400_000);
   const link = await manager.save(
     manager.create(QuoteLink, {
@@ -220,6 +229,7 @@ async function acceptWithPaidDeposit(
   await event(manager, estimate.companyId, estimate.id, null, 'deposit-paid', {
     amount: totals.deposit,
   });
+  return acceptance;
 }
 
 async function event(
