@@ -6,8 +6,10 @@ import {
   IconFileInvoice,
   IconHome2,
   IconMail,
+  IconNotebook,
   IconReceipt2,
   IconRulerMeasure,
+  IconShovel,
   IconUsersGroup,
 } from '@tabler/icons-react';
 import type { AppNavItem } from '@/components/layouts/app-layout';
@@ -26,13 +28,20 @@ const NAV_ITEMS: Array<AppNavItem & { area: Area }> = [
     area: 'pricedTakeoffs',
   },
   { label: 'Estimates', to: paths.estimates.getHref(), icon: IconFileInvoice, area: 'estimates' },
+  { label: 'Jobs', to: paths.jobs.getHref(), icon: IconShovel, area: 'jobs' },
   { label: 'Price book', to: paths.priceBook.getHref(), icon: IconBook2, area: 'priceBook' },
-  // Estimates and Jobs are added here, each with its own area in lib/authorization.ts,
-  // when their pages exist; links to missing pages are not shown.
   { label: 'Approvals', to: paths.approvals.getHref(), icon: ApprovalsNavIcon, area: 'approvals' },
   { label: 'Team', to: paths.team.getHref(), icon: IconUsersGroup, area: 'team' },
   { label: 'Company', to: paths.company.getHref(), icon: IconBuildingStore, area: 'company' },
 ];
+
+/** A crew lead's day starts here: today's jobs, each with its log, and anything not sent yet. */
+const CREW_LEAD_ITEM: AppNavItem = {
+  label: 'My jobs',
+  description: 'Today’s log',
+  to: paths.myJobs.getHref(),
+  icon: IconNotebook,
+};
 
 /** Shown only where the server has a developer mailbox (never in production, where it answers 404). */
 const MAILBOX_ITEM: AppNavItem & { area: Area } = {
@@ -49,5 +58,12 @@ type NavOptions = {
 
 export function navItemsFor(role: Role, { mailbox = false }: NavOptions = {}): AppNavItem[] {
   const items = mailbox ? [...NAV_ITEMS, MAILBOX_ITEM] : NAV_ITEMS;
-  return items.filter((item) => canAccess(role, item.area)).map(({ area: _area, ...item }) => item);
+  const allowed = items
+    .filter((item) => canAccess(role, item.area))
+    .map(({ area: _area, ...item }) => item);
+  if (role !== 'crew_lead') return allowed;
+  // Right under Home, where a phone's thumb finds it first.
+  return allowed.flatMap((item) =>
+    item.to === paths.home.getHref() ? [item, CREW_LEAD_ITEM] : [item],
+  );
 }

@@ -97,6 +97,38 @@ export function createAppRoutes(): RouteObject[] {
               }),
             },
             {
+              path: paths.jobs.path,
+              lazy: async () => ({ Component: (await import('./routes/app/jobs')).JobsRoute }),
+            },
+            {
+              // The week calendar; the cost report's charts load with the job's chunk, not this one.
+              path: paths.jobSchedule.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/job-schedule')).JobScheduleRoute,
+              }),
+            },
+            {
+              path: paths.job.path,
+              lazy: async () => ({ Component: (await import('./routes/app/job')).JobRoute }),
+            },
+            {
+              // The crew's daily log, phone-first; it works offline through an outbox on the phone.
+              path: paths.jobLog.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/daily-log')).DailyLogRoute,
+              }),
+            },
+            {
+              path: paths.jobLogToday.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/daily-log')).DailyLogRoute,
+              }),
+            },
+            {
+              path: paths.myJobs.path,
+              lazy: async () => ({ Component: (await import('./routes/app/my-jobs')).MyJobsRoute }),
+            },
+            {
               // A developer tool: the e-mails the local fake SMTP server caught. 404 in production.
               path: paths.devMailbox.path,
               lazy: async () => ({

@@ -23,6 +23,26 @@ export const paths = {
     path: '/estimates/:id',
     getHref: (id: string) => `/estimates/${encodeURIComponent(id)}`,
   },
+  jobs: { path: '/jobs', getHref: () => '/jobs' },
+  /** Static, so it outranks `/jobs/:id`. */
+  jobSchedule: {
+    path: '/jobs/schedule',
+    getHref: (week?: string) => (week ? `/jobs/schedule?week=${week}` : '/jobs/schedule'),
+  },
+  job: { path: '/jobs/:id', getHref: (id: string) => `/jobs/${encodeURIComponent(id)}` },
+  /** The crew's log of one day on the job (`date` is YYYY-MM-DD). */
+  jobLog: {
+    path: '/jobs/:id/log/:date',
+    getHref: (id: string, date: string) =>
+      `/jobs/${encodeURIComponent(id)}/log/${encodeURIComponent(date)}`,
+  },
+  /** Today's log of a job, for a link or bookmark that is right on any day. */
+  jobLogToday: {
+    path: '/jobs/:id/log',
+    getHref: (id: string) => `/jobs/${encodeURIComponent(id)}/log`,
+  },
+  /** A crew lead's jobs for today and the days ahead, each day's log one tap away. */
+  myJobs: { path: '/my-jobs', getHref: () => '/my-jobs' },
   devMailbox: { path: '/dev/mailbox', getHref: () => '/dev/mailbox' },
   signIn: {
     path: '/sign-in',

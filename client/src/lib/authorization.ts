@@ -17,6 +17,15 @@ export const AREA_ROLES = {
   /** The approval queue and the pipeline dashboard on Home. */
   approvals: ['owner'],
   dashboard: ['owner'],
+  /** Jobs, the schedule and crews: everyone reads them; crew leads mostly keep the daily logs. */
+  jobs: ROLES,
+  /** A job's budget money and cost report; crew leads see quantities only. */
+  jobsMoney: ['owner', 'estimator'],
+  /** Giving a job a date and crew, or moving it. */
+  jobsSchedule: ['owner', 'estimator'],
+  /** Closing a completed job, after which it takes no more logs. */
+  jobsClose: ['owner'],
+  crewsEdit: ['owner'],
   /** The developer mailbox; the server also hides it (404) in production. */
   devMailbox: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;

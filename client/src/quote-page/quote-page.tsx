@@ -1,11 +1,13 @@
 import { Container, Divider, Paper, Stack, Title } from '@mantine/core';
 import { quoteSelectionTotals, type QuoteView } from '@pondwright/shared';
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { useQuote } from './api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from './api/quote-request';
 import { AcceptForm } from './components/accept-form';
 import { AcceptedPanel, DeclinedPanel } from './components/answer-panels';
+import { ChangeAnsweredPanel, ChangeOrderSection } from './components/change-order';
 import { DeclineForm } from './components/decline-form';
+import { InvoiceSection } from './components/invoice-section';
 import { PaymentPanel } from './components/payment-panel';
 import { PriceSection } from './components/price-section';
 import {
@@ -26,6 +28,8 @@ import {
   QuoteNotFound,
 } from './components/status-pages';
 import { PaymentScheduleSection, StickySummary, type ChosenTotals } from './components/totals';
+import { formatMoney } from './lib/format';
+import { linkKind } from './lib/link-kind';
 import { subtractMoney } from './lib/money';
 import { paymentReturnFrom, tokenFromPath, type PaymentReturn } from './lib/location';
 
@@ -54,8 +58,29 @@ export function QuotePage({ pathname, search, pollMs = 2000, pollForMs = 60_000 
   );
 }
 
-function awaitingDeposit(view: QuoteView | undefined): boolean {
-  return view?.state === 'accepted' && view.payment?.status !== 'paid';
+/** Back from the payment provider, something is still to be confirmed: the balance or the deposit. */
+function awaitingPayment(view: QuoteView | undefined): boolean {
+  if (!view) return false;
+  switch (linkKind(view)) {
+    case 'invoice':
+      return view.invoice?.status !== 'paid';
+    case 'change':
+      return false;
+    case 'quote':
+      return view.state === 'accepted' && view.payment?.status !== 'paid';
+  }
+}
+
+function pageTitle(view: QuoteView): string {
+  const { estimate, company } = view;
+  switch (linkKind(view)) {
+    case 'invoice':
+      return `Final invoice for quote ${estimate.number} from ${company.name}`;
+    case 'change':
+      return `Change ${view.changeOrder?.number ?? ''} to quote ${estimate.number} from ${company.name}`;
+    case 'quote':
+      return `Quote ${estimate.number} from ${company.name}`;
+  }
 }
 
 type QuoteScreenProps = {
@@ -76,7 +101,7 @@ function QuoteScreen({ token, paymentReturn, pollMs, pollForMs }: QuoteScreenPro
   }, [confirming, pollForMs, round]);
 
   const query = useQuote(token, (view) =>
-    confirming && !waitedOut && awaitingDeposit(view) ? pollMs : false,
+    confirming && !waitedOut && awaitingPayment(view) ? pollMs : false,
   );
   const { refetch } = query;
   const checkAgain = useCallback(() => {
@@ -87,7 +112,7 @@ function QuoteScreen({ token, paymentReturn, pollMs, pollForMs }: QuoteScreenPro
 
   const view = query.data;
   useEffect(() => {
-    if (view) document.title = `Quote ${view.estimate.number} from ${view.company.name}`;
+    if (view) document.title = pageTitle(view);
   }, [view]);
 
   if (view) {
@@ -122,7 +147,11 @@ type QuoteDocumentProps = {
   onCheckAgain: () => void;
 };
 
-/** The quote itself, in its three states: open (choose and accept), accepted, declined. */
+/**
+ * The quote itself, in its three states: open (choose and accept), accepted, declined. A link may also
+ * carry a change order (accept or decline the change) or the final invoice (pay the balance); both
+ * come after the quote was accepted and lead the page, with the project's details below.
+ */
 function QuoteDocument({
   view,
   token,
@@ -133,7 +162,12 @@ function QuoteDocument({
 }: QuoteDocumentProps) {
   const [chosenIds, setChosenIds] = useState<string[]>([]);
   const [answeredHere, setAnsweredHere] = useState(false);
-  const open = view.state === 'open';
+  const kind = linkKind(view);
+  const change = kind === 'change' ? view.changeOrder : null;
+  const invoice = kind === 'invoice' ? view.invoice : null;
+  // Only a quote link chooses options and pays the deposit; a change answers on its own.
+  const open = kind === 'quote' && view.state === 'open';
+  const changeOpen = change?.state === 'open';
   const acceptedIds = view.acceptance?.optionIds;
   const shownIds = useMemo(
     () => (view.state === 'accepted' ? (acceptedIds ?? []) : chosenIds),
@@ -165,14 +199,36 @@ function QuoteDocument({
         ? [...ids.filter((id) => id !== optionId), optionId]
         : ids.filter((id) => id !== optionId),
     );
+  const money = (amount: string) => formatMoney(amount, view.currency);
 
   return (
     <Container size={720} px="xs" py="md">
       <Stack gap="md">
         <QuoteHeader view={view} token={token} />
         <Stack gap="md" component="main">
-          <QuoteTitle view={view} token={token} />
-          {view.state === 'accepted' && (
+          <QuoteTitle view={view} token={token} kind={kind} />
+          {change && (
+            <>
+              <ChangeOrderSection
+                view={view}
+                change={change}
+                answerHref={changeOpen ? `#${ACCEPT_ID}` : undefined}
+              />
+              <ChangeAnsweredPanel view={view} change={change} focus={answeredHere} />
+            </>
+          )}
+          {invoice && (
+            <InvoiceSection
+              view={view}
+              invoice={invoice}
+              token={token}
+              paymentReturn={paymentReturn}
+              confirming={confirming}
+              waitedOut={waitedOut}
+              onCheckAgain={onCheckAgain}
+            />
+          )}
+          {kind === 'quote' && view.state === 'accepted' && (
             <AcceptedPanel
               view={view}
               totals={totals}
@@ -189,45 +245,114 @@ function QuoteDocument({
               }
             />
           )}
-          {view.state === 'declined' && <DeclinedPanel view={view} focus={answeredHere} />}
+          {kind === 'quote' && view.state === 'declined' && (
+            <DeclinedPanel view={view} focus={answeredHere} />
+          )}
           <HighlightsSection view={view} />
           <ScopeSection view={view} />
           <IncludedSection view={view} />
           <DrawingsSection view={view} />
-          <PriceSection view={view} chosenIds={shownIds} onToggle={open ? toggle : undefined} />
+          <PriceSection
+            view={view}
+            chosenIds={shownIds}
+            onToggle={open ? toggle : undefined}
+            title={change ? 'Project price with this change' : undefined}
+          />
           {open && <StickySummary view={view} totals={totals} acceptHref={`#${ACCEPT_ID}`} />}
-          {view.state !== 'declined' && (
+          {kind === 'quote' && view.state !== 'declined' && (
             <PaymentScheduleSection
               view={view}
               totals={totals}
               depositPaid={view.payment?.status === 'paid'}
             />
           )}
+          {/* The final invoice recalls the acceptance read-only; its figures are above. */}
+          {invoice && view.acceptance && (
+            <AcceptedPanel view={view} totals={totals} focus={false} invoiced />
+          )}
           <TermsSection view={view} />
           <SafetySection view={view} />
           {open && (
-            <Paper component="section" p="md" id={ACCEPT_ID} aria-labelledby={`${ACCEPT_ID}-title`}>
-              <Stack gap="lg">
-                <div>
-                  <Title order={2} fz="h4" id={`${ACCEPT_ID}-title`} mb="sm">
-                    Accept this quote
-                  </Title>
-                  <AcceptForm
-                    view={view}
-                    token={token}
-                    optionIds={live.optionIds}
-                    totals={totals}
-                    onAccepted={() => setAnsweredHere(true)}
-                  />
-                </div>
-                <Divider />
+            <AnswerCard
+              title="Accept this quote"
+              accept={
+                <AcceptForm
+                  view={view}
+                  token={token}
+                  optionIds={live.optionIds}
+                  summary={
+                    <>
+                      Your total is <strong>{money(totals.total)}</strong> with the options you
+                      ticked. After you accept, you can pay the deposit of{' '}
+                      <strong>{money(totals.deposit)}</strong> online.
+                    </>
+                  }
+                  onAccepted={() => setAnsweredHere(true)}
+                />
+              }
+              decline={
                 <DeclineForm view={view} token={token} onDeclined={() => setAnsweredHere(true)} />
-              </Stack>
-            </Paper>
+              }
+            />
+          )}
+          {change && changeOpen && (
+            <AnswerCard
+              title="Accept this change"
+              accept={
+                <AcceptForm
+                  view={view}
+                  token={token}
+                  subject="change"
+                  optionIds={[]}
+                  summary={
+                    <>
+                      This change adds <strong>{money(change.total)}</strong>, tax included, and
+                      brings your project to <strong>{money(change.newJobTotal)}</strong>. There’s
+                      nothing to pay now: it’s added to the balance due when the work is finished.
+                    </>
+                  }
+                  onAccepted={() => setAnsweredHere(true)}
+                />
+              }
+              decline={
+                <DeclineForm
+                  view={view}
+                  token={token}
+                  subject="change"
+                  onDeclined={() => setAnsweredHere(true)}
+                />
+              }
+            />
           )}
         </Stack>
-        <QuoteFooter view={view} token={token} />
+        <QuoteFooter view={view} token={token} kind={kind} />
       </Stack>
     </Container>
+  );
+}
+
+/** The accept and decline forms, at the foot of the page. */
+function AnswerCard({
+  title,
+  accept,
+  decline,
+}: {
+  title: string;
+  accept: ReactNode;
+  decline: ReactNode;
+}) {
+  return (
+    <Paper component="section" p="md" id={ACCEPT_ID} aria-labelledby={`${ACCEPT_ID}-title`}>
+      <Stack gap="lg">
+        <div>
+          <Title order={2} fz="h4" id={`${ACCEPT_ID}-title`} mb="sm">
+            {title}
+          </Title>
+          {accept}
+        </div>
+        <Divider />
+        {decline}
+      </Stack>
+    </Paper>
   );
 }

@@ -1,16 +1,39 @@
 import { Alert, Button, Checkbox, Stack, Text, TextInput } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
-import { useRef, useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent, type ReactNode } from 'react';
 import { useAcceptQuote, useRefreshQuote } from '../api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
 import { browser } from '../lib/browser';
-import { formatMoney } from '../lib/format';
-import type { ChosenTotals } from './totals';
 
 // The same words as `acceptQuoteRequestSchema`, checked here by hand so zod stays out of the bundle.
 const NAME_MESSAGE = 'Type your full name';
 const NAME_TOO_LONG = 'Use at most 120 characters';
-const CONSENT_MESSAGE = 'Tick the box to agree to the quote and its terms';
+
+/** What is being accepted: the quote, or a change order on the job made from it. */
+export type AcceptSubject = 'quote' | 'change';
+
+const WORDS = {
+  quote: {
+    form: 'Accept this quote',
+    nameHint: 'Typing your name here is how you sign the quote.',
+    consent: 'I accept this quote, the options I chose and the terms above',
+    consentMissing: 'Tick the box to agree to the quote and its terms',
+    changedTitle: 'This quote has changed',
+    changed: 'This quote was updated; reload to see the new version',
+    reload: 'Reload the quote',
+    submit: 'Accept quote',
+  },
+  change: {
+    form: 'Accept this change',
+    nameHint: 'Typing your name here is how you sign the change.',
+    consent: 'I agree to this change and its price, on the terms of my quote',
+    consentMissing: 'Tick the box to agree to the change',
+    changedTitle: 'This change has been updated',
+    changed: 'This change was updated; reload to see the new version',
+    reload: 'Reload the page',
+    submit: 'Accept change',
+  },
+} satisfies Record<AcceptSubject, Record<string, string>>;
 
 type FieldErrors = { fullName?: string; consent?: string };
 type FormProblem = { kind: 'version' | 'other'; message: string };
@@ -18,13 +41,24 @@ type FormProblem = { kind: 'version' | 'other'; message: string };
 type AcceptFormProps = {
   view: QuoteView;
   token: string;
+  /** A quote (the default) or a change order, which has no options to send. */
+  subject?: AcceptSubject;
   optionIds: string[];
-  totals: ChosenTotals;
+  /** What accepting means in money, shown above the name. */
+  summary: ReactNode;
   onAccepted: () => void;
 };
 
-/** Name, consent, "Accept quote": sends the options chosen and the version shown. */
-export function AcceptForm({ view, token, optionIds, totals, onAccepted }: AcceptFormProps) {
+/** Name, consent, "Accept quote" (or "Accept change"): sends the options chosen and the version shown. */
+export function AcceptForm({
+  view,
+  token,
+  subject = 'quote',
+  optionIds,
+  summary,
+  onAccepted,
+}: AcceptFormProps) {
+  const words = WORDS[subject];
   const accept = useAcceptQuote(token);
   const refresh = useRefreshQuote(token);
   const [fullName, setFullName] = useState('');
@@ -53,7 +87,7 @@ export function AcceptForm({ view, token, optionIds, totals, onAccepted }: Accep
     const found: FieldErrors = {};
     if (name.length < 2) found.fullName = NAME_MESSAGE;
     else if (name.length > 120) found.fullName = NAME_TOO_LONG;
-    if (!consent) found.consent = CONSENT_MESSAGE;
+    if (!consent) found.consent = words.consentMissing;
     setErrors(found);
     if (found.fullName || found.consent) {
       focusFirst(found);
@@ -67,7 +101,7 @@ export function AcceptForm({ view, token, optionIds, totals, onAccepted }: Accep
           if (isQuoteRequestError(error) && error.code === 'QUOTE_VERSION_CHANGED') {
             showProblem({
               kind: 'version',
-              message: 'This quote was updated; reload to see the new version',
+              message: words.changed,
             });
             return;
           }
@@ -101,17 +135,13 @@ export function AcceptForm({ view, token, optionIds, totals, onAccepted }: Accep
   };
 
   return (
-    <form onSubmit={submit} noValidate aria-label="Accept this quote">
+    <form onSubmit={submit} noValidate aria-label={words.form}>
       <Stack gap="md">
-        <Text>
-          Your total is <strong>{formatMoney(totals.total, view.currency)}</strong> with the options
-          you ticked. After you accept, you can pay the deposit of{' '}
-          <strong>{formatMoney(totals.deposit, view.currency)}</strong> online.
-        </Text>
+        <Text>{summary}</Text>
         <TextInput
           ref={nameInput}
           label="Your full name"
-          description="Typing your name here is how you sign the quote."
+          description={words.nameHint}
           autoComplete="name"
           required
           value={fullName}
@@ -124,7 +154,7 @@ export function AcceptForm({ view, token, optionIds, totals, onAccepted }: Accep
         />
         <Checkbox
           ref={consentInput}
-          label="I accept this quote, the options I chose and the terms above"
+          label={words.consent}
           checked={consent}
           onChange={(event) => {
             setConsent(event.currentTarget.checked);
@@ -140,22 +170,20 @@ export function AcceptForm({ view, token, optionIds, totals, onAccepted }: Accep
             tabIndex={-1}
             role="alert"
             color={problem.kind === 'version' ? 'clay' : 'red'}
-            title={
-              problem.kind === 'version' ? 'This quote has changed' : 'We couldn’t record that'
-            }
+            title={problem.kind === 'version' ? words.changedTitle : 'We couldn’t record that'}
           >
             <Stack gap="xs" align="flex-start">
               <Text fz="sm">{problem.message}</Text>
               {problem.kind === 'version' && (
                 <Button size="xs" color="clay" onClick={() => browser.reload()}>
-                  Reload the quote
+                  {words.reload}
                 </Button>
               )}
             </Stack>
           </Alert>
         )}
         <Button type="submit" size="md" loading={accept.isPending} fullWidth>
-          Accept quote
+          {words.submit}
         </Button>
       </Stack>
     </form>

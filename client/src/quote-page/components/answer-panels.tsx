@@ -6,7 +6,7 @@ import { MoneyRows } from './section';
 import type { ChosenTotals } from './totals';
 
 /** A heading that takes focus when asked (after an answer made here), so it is read out first. */
-function FocusHeading({ children, focus }: { children: ReactNode; focus: boolean }) {
+export function FocusHeading({ children, focus }: { children: ReactNode; focus: boolean }) {
   const heading = useRef<HTMLHeadingElement>(null);
   useEffect(() => {
     if (!focus) return;
@@ -25,12 +25,17 @@ type AcceptedPanelProps = {
   totals: ChosenTotals;
   /** Accepted just now on this page: the heading takes focus. */
   focus: boolean;
-  /** The deposit's part: pay, confirming or received. */
-  payment: ReactNode;
+  /** The deposit's part: pay, confirming or received (none on an invoice link). */
+  payment?: ReactNode;
+  /**
+   * On the final invoice's link the invoice has the figures that count now (changes accepted since
+   * included), so the acceptance only recalls the total agreed then.
+   */
+  invoiced?: boolean;
 };
 
 /** Who accepted and when, the options chosen and the totals, then the deposit. */
-export function AcceptedPanel({ view, totals, focus, payment }: AcceptedPanelProps) {
+export function AcceptedPanel({ view, totals, focus, payment, invoiced }: AcceptedPanelProps) {
   const acceptance = view.acceptance;
   const money = (amount: string) => formatMoney(amount, view.currency);
   const chosen = view.options.filter((o) => acceptance?.optionIds.includes(o.id));
@@ -44,7 +49,11 @@ export function AcceptedPanel({ view, totals, focus, payment }: AcceptedPanelPro
     >
       <Stack gap="sm">
         <FocusHeading focus={focus}>
-          {acceptance ? `Thank you, ${acceptance.fullName}` : 'Thank you'}
+          {invoiced
+            ? 'Your acceptance'
+            : acceptance
+              ? `Thank you, ${acceptance.fullName}`
+              : 'Thank you'}
         </FocusHeading>
         {acceptance && (
           <Text fz="sm">
@@ -68,17 +77,30 @@ export function AcceptedPanel({ view, totals, focus, payment }: AcceptedPanelPro
             </Text>
           )}
         </div>
-        <MoneyRows
-          label="Your totals"
-          rows={[
-            {
-              label: `Deposit (${formatPercent(view.depositPct)})${view.payment?.status === 'paid' ? ', paid' : ''}`,
-              value: money(totals.deposit),
-            },
-            { label: 'Balance, on completion', value: money(totals.balance) },
-            { label: 'Total, tax included', value: money(totals.total), total: true },
-          ]}
-        />
+        {invoiced ? (
+          <MoneyRows
+            label="Your total when you accepted"
+            rows={[
+              {
+                label: 'Total when you accepted, tax included',
+                value: money(totals.total),
+                total: true,
+              },
+            ]}
+          />
+        ) : (
+          <MoneyRows
+            label="Your totals"
+            rows={[
+              {
+                label: `Deposit (${formatPercent(view.depositPct)})${view.payment?.status === 'paid' ? ', paid' : ''}`,
+                value: money(totals.deposit),
+              },
+              { label: 'Balance, on completion', value: money(totals.balance) },
+              { label: 'Total, tax included', value: money(totals.total), total: true },
+            ]}
+          />
+        )}
         {payment}
       </Stack>
     </Paper>

@@ -3,17 +3,37 @@ import type { QuoteView } from '@pondwright/shared';
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { useDeclineQuote, useRefreshQuote } from '../api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
+import type { AcceptSubject } from './accept-form';
+
+const WORDS = {
+  quote: {
+    heading: 'Not going ahead?',
+    intro: 'You can add a note if you like.',
+    form: 'Decline this quote',
+    submit: 'Decline quote',
+  },
+  change: {
+    heading: 'Rather not make this change?',
+    intro: 'Your project goes ahead as agreed before. You can add a note if you like.',
+    form: 'Decline this change',
+    submit: 'Decline change',
+  },
+} satisfies Record<AcceptSubject, Record<string, string>>;
 
 /** "Decline" opens an optional reason; declining can't be undone here, so it takes a second click. */
 export function DeclineForm({
   view,
   token,
+  subject = 'quote',
   onDeclined,
 }: {
   view: QuoteView;
   token: string;
+  /** A quote (the default) or a change order. */
+  subject?: AcceptSubject;
   onDeclined: () => void;
 }) {
+  const words = WORDS[subject];
   const decline = useDeclineQuote(token);
   const refresh = useRefreshQuote(token);
   const [open, setOpen] = useState(false);
@@ -60,10 +80,10 @@ export function DeclineForm({
   return (
     <Stack gap="xs">
       <Title order={3} fz="h5">
-        Not going ahead?
+        {words.heading}
       </Title>
       {open ? (
-        <form onSubmit={submit} noValidate aria-label="Decline this quote">
+        <form onSubmit={submit} noValidate aria-label={words.form}>
           <Stack gap="sm">
             <Textarea
               ref={reasonInput}
@@ -82,7 +102,7 @@ export function DeclineForm({
             )}
             <Group gap="sm">
               <Button type="submit" color="red" variant="light" loading={decline.isPending}>
-                Decline quote
+                {words.submit}
               </Button>
               <Button variant="subtle" color="stone" onClick={close} disabled={decline.isPending}>
                 Cancel
@@ -93,7 +113,7 @@ export function DeclineForm({
       ) : (
         <>
           <Text fz="sm" c="dimmed">
-            Let {view.company.name} know. You can add a note if you like.
+            Let {view.company.name} know. {words.intro}
           </Text>
           <div>
             <Button ref={opener} variant="default" onClick={() => setOpen(true)}>

@@ -5,11 +5,16 @@ import { useRefreshQuote, useStartCheckout } from '../api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
 import type { PaymentReturn } from '../lib/location';
 import { browser } from '../lib/browser';
-import { formatDay, formatMoney } from '../lib/format';
+import { formatDay, formatMoney, isZeroMoney } from '../lib/format';
+
+/** The deposit after acceptance, or the balance on the final invoice. */
+export type PaymentPurpose = 'deposit' | 'balance';
 
 type PaymentPanelProps = {
   view: QuoteView;
   token: string;
+  /** What is paid; the deposit unless the link carries the final invoice. */
+  purpose?: PaymentPurpose;
   paymentReturn: PaymentReturn;
   /** Back from the provider with `?payment=success`: the page checks every few seconds. */
   confirming: boolean;
@@ -18,10 +23,28 @@ type PaymentPanelProps = {
   onCheckAgain: () => void;
 };
 
-/** The deposit after acceptance: pay it, wait for its confirmation, or see it received. */
+type PaymentState = { amount: string; paid: boolean; paidAt: string | null };
+
+function paymentState(view: QuoteView, purpose: PaymentPurpose): PaymentState {
+  if (purpose === 'balance') {
+    return {
+      amount: view.invoice?.balance ?? '0',
+      paid: view.invoice?.status === 'paid',
+      paidAt: view.invoice?.paidAt ?? null,
+    };
+  }
+  return {
+    amount: view.payment?.amount ?? view.acceptance?.deposit ?? '0',
+    paid: view.payment?.status === 'paid',
+    paidAt: view.payment?.paidAt ?? null,
+  };
+}
+
+/** Pay (the deposit or the balance), wait for the payment's confirmation, or see it received. */
 export function PaymentPanel({
   view,
   token,
+  purpose = 'deposit',
   paymentReturn,
   confirming,
   waitedOut,
@@ -32,15 +55,28 @@ export function PaymentPanel({
   const [leaving, setLeaving] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const money = (amount: string) => formatMoney(amount, view.currency);
-  const deposit = view.payment?.amount ?? view.acceptance?.deposit ?? '0';
+  const { amount, paid, paidAt } = paymentState(view, purpose);
+  const balance = purpose === 'balance';
 
-  if (view.payment?.status === 'paid') {
+  if (paid && balance) {
+    return (
+      <Alert color="reed" variant="light" title="Paid in full — thank you" role="status">
+        <Text fz="sm">
+          {paidAt
+            ? `We received your payment of ${money(amount)} on ${formatDay(paidAt)}.`
+            : `We received your payment of ${money(amount)}.`}{' '}
+          Nothing more is due. Keep this page for your records.
+        </Text>
+      </Alert>
+    );
+  }
+
+  if (paid) {
     return (
       <Alert color="reed" variant="light" title="Deposit received" role="status">
         <Text fz="sm">
-          Thank you. We received your deposit of {money(view.payment.amount)}
-          {view.payment.paidAt ? ` on ${formatDay(view.payment.paidAt)}` : ''}. Keep this page or
-          the PDF for your records.
+          Thank you. We received your deposit of {money(amount)}
+          {paidAt ? ` on ${formatDay(paidAt)}` : ''}. Keep this page or the PDF for your records.
         </Text>
       </Alert>
     );
@@ -82,6 +118,10 @@ export function PaymentPanel({
     );
   }
 
+  if (balance && isZeroMoney(amount)) {
+    return <Text fz="sm">There’s nothing left to pay. Thank you!</Text>;
+  }
+
   const pay = () => {
     setError(null);
     checkout.mutate(undefined, {
@@ -100,11 +140,16 @@ export function PaymentPanel({
     <Stack gap="sm">
       {paymentReturn === 'cancelled' && (
         <Alert color="stone" variant="light" title="Your payment wasn’t completed" role="status">
-          <Text fz="sm">No money was taken. You can pay the deposit whenever you’re ready.</Text>
+          <Text fz="sm">
+            No money was taken. You can pay the {balance ? 'balance' : 'deposit'} whenever you’re
+            ready.
+          </Text>
         </Alert>
       )}
       <Text fz="sm">
-        The next step is the deposit. You’ll pay on a secure payment page and then come back here.
+        {balance
+          ? 'You’ll pay on a secure payment page and then come back here.'
+          : 'The next step is the deposit. You’ll pay on a secure payment page and then come back here.'}
       </Text>
       {error && (
         <Alert color="red" role="alert" title="We couldn’t start the payment">
@@ -118,7 +163,7 @@ export function PaymentPanel({
           loading={checkout.isPending || leaving}
           w={{ base: '100%', sm: 'auto' }}
         >
-          Pay deposit of {money(deposit)}
+          {balance ? `Pay the balance of ${money(amount)}` : `Pay deposit of ${money(amount)}`}
         </Button>
       </div>
     </Stack>

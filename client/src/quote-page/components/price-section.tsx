@@ -67,14 +67,21 @@ type PriceSectionProps = {
   chosenIds: readonly string[];
   /** Given while the quote is open: the options become checkboxes. */
   onToggle?: (optionId: string, chosen: boolean) => void;
+  /** The section's heading; "Your price" unless the link carries a change. */
+  title?: string;
 };
 
 /** The base price and the options, as checkboxes while the quote is open. */
-export function PriceSection({ view, chosenIds, onToggle }: PriceSectionProps) {
+export function PriceSection({
+  view,
+  chosenIds,
+  onToggle,
+  title = 'Your price',
+}: PriceSectionProps) {
   const accepted = view.state === 'accepted';
   const optionsHeading = useId();
   return (
-    <Section title="Your price">
+    <Section title={title}>
       <Stack gap="md">
         <BasePrice view={view} />
         {view.options.length > 0 && (

@@ -5,6 +5,7 @@ import { CrossSectionSvg } from '@/components/drawings/cross-section-svg';
 import { PlanSvg } from '@/components/drawings/plan-svg';
 import { quoteUrl } from '../api/quote-request';
 import { formatDay } from '../lib/format';
+import type { LinkKind } from '../lib/link-kind';
 import { Section } from './section';
 
 /** A plain download link (the PDF needs no sign-in); named for what it gets. */
@@ -42,15 +43,31 @@ export function QuoteHeader({ view, token }: { view: QuoteView; token: string })
   );
 }
 
+function eyebrow(view: QuoteView, kind: LinkKind): string {
+  const { estimate } = view;
+  if (kind === 'invoice') return `Final invoice · quote ${estimate.number}`;
+  if (kind === 'change' && view.changeOrder) {
+    return `Change ${view.changeOrder.number} · quote ${estimate.number}`;
+  }
+  return `Quote ${estimate.number}${estimate.versionNumber > 1 ? ` · version ${estimate.versionNumber}` : ''}`;
+}
+
 /** The quote's number, title, customer, site and dates, and the PDF link. */
-export function QuoteTitle({ view, token }: { view: QuoteView; token: string }) {
+export function QuoteTitle({
+  view,
+  token,
+  kind = 'quote',
+}: {
+  view: QuoteView;
+  token: string;
+  kind?: LinkKind;
+}) {
   const { estimate } = view;
   return (
     <Stack gap="xs">
       <div>
         <Text c="dimmed" fz="sm" fw={600}>
-          Quote {estimate.number}
-          {estimate.versionNumber > 1 ? ` · version ${estimate.versionNumber}` : ''}
+          {eyebrow(view, kind)}
         </Text>
         <Title order={1} fz={{ base: 'h2', sm: 'h1' }} lh={1.2}>
           {estimate.title}
@@ -65,10 +82,19 @@ export function QuoteTitle({ view, token }: { view: QuoteView; token: string }) 
             <dd>{estimate.siteAddress}</dd>
           </>
         )}
-        <dt>Issued</dt>
-        <dd>{formatDay(estimate.issuedAt)}</dd>
-        <dt>Valid until</dt>
-        <dd>{formatDay(estimate.expiresAt)}</dd>
+        {kind === 'invoice' && view.invoice ? (
+          <>
+            <dt>Invoice date</dt>
+            <dd>{formatDay(view.invoice.issuedAt)}</dd>
+          </>
+        ) : (
+          <>
+            <dt>{kind === 'change' ? 'Sent' : 'Issued'}</dt>
+            <dd>{formatDay(estimate.issuedAt)}</dd>
+            <dt>{kind === 'change' ? 'Answer by' : 'Valid until'}</dt>
+            <dd>{formatDay(estimate.expiresAt)}</dd>
+          </>
+        )}
       </dl>
       <div>
         <PdfLink token={token} />
@@ -185,13 +211,27 @@ export function SafetySection({ view }: { view: QuoteView }) {
   );
 }
 
+const FOOTER_SUBJECT: Record<LinkKind, string> = {
+  quote: 'this quote',
+  change: 'this change',
+  invoice: 'this invoice',
+};
+
 /** Who to write to with a question. */
-export function QuoteFooter({ view, token }: { view: QuoteView; token: string }) {
+export function QuoteFooter({
+  view,
+  token,
+  kind = 'quote',
+}: {
+  view: QuoteView;
+  token: string;
+  kind?: LinkKind;
+}) {
   const email = view.company.replyToEmail;
   return (
     <Stack component="footer" gap="xs" align="center" py="md">
       <Text fz="sm" c="dimmed" ta="center">
-        Questions about this quote?{' '}
+        Questions about {FOOTER_SUBJECT[kind]}?{' '}
         {email ? (
           <>
             Write to {view.company.name} at <Anchor href={`mailto:${email}`}>{email}</Anchor>.

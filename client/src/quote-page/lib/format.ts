@@ -32,6 +32,14 @@ export function formatAddedMoney(amount: string, currency: string): string {
   return value > 0 ? `+${formatMoney(amount, currency)}` : formatMoney(amount, currency);
 }
 
+/** A quantity without needless zeros: "12.000" → "12", "1250.5" → "1,250.5". */
+export function formatQuantity(quantity: string): string {
+  const value = Number(quantity);
+  return Number.isFinite(value)
+    ? value.toLocaleString('en-US', { maximumFractionDigits: 3 })
+    : quantity;
+}
+
 /** True for "0", "0.00" and the like. */
 export function isZeroMoney(amount: string): boolean {
   return Number(amount) === 0;

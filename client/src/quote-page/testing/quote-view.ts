@@ -95,6 +95,8 @@ export function buildQuoteView(overrides: Partial<QuoteView> = {}): QuoteView {
     acceptance: null,
     payment: null,
     declinedAt: null,
+    invoice: null,
+    changeOrder: null,
     ...overrides,
   };
 }

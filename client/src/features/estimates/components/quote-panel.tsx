@@ -18,6 +18,7 @@ import { formatDate, formatMoney } from '@/lib/format';
 import { notifyApiError } from '@/lib/notify';
 import { useDownloadQuotePdf } from '../api/download-quote-pdf';
 import { hasQuote, SENDABLE_STATUSES, useEstimateQuote } from '../api/get-estimate-quote';
+import { MakeJob } from './make-job';
 import { formatDateTime } from './quote-format';
 import { QuoteLinksTable } from './quote-links-table';
 import { SendQuoteModal } from './send-quote-modal';
@@ -199,6 +200,7 @@ export function EstimateQuotePanel({ estimate }: { estimate: EstimateView }) {
             >
               Download PDF
             </Button>
+            {accepted && <MakeJob estimate={estimate} />}
             {sendable && (
               <Button leftSection={<IconSend size={16} />} onClick={() => setSending(true)}>
                 {resend ? 'Resend' : 'Send to homeowner'}
