@@ -196,6 +196,19 @@ describe('the schedule', () => {
       .get('/api/jobs?from=March')
       .set(...bearer(owner))
       .expect(400);
+    await testApp
+      .http()
+      .get('/api/jobs?status=scheduled,done')
+      .set(...bearer(owner))
+      .expect(400);
+    const open = (
+      await testApp
+        .http()
+        .get('/api/jobs?status=scheduled,in_progress')
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as JobListItem[];
+    expect(open.map((j) => j.id)).toEqual([job.id]);
   });
 });
 

@@ -145,9 +145,10 @@ export class JobsService {
     };
     const from = date('from');
     const to = date('to');
-    const status = query.status || null;
-    if (status && !(JOB_STATUSES as readonly string[]).includes(status)) {
-      problems.push({ field: 'status', message: `Choose one of: ${JOB_STATUSES.join(', ')}` });
+    // One status or several, comma-separated (a crew lead wants scheduled and in progress together).
+    const statuses = query.status ? query.status.split(',').map((value) => value.trim()) : null;
+    if (statuses?.some((value) => !(JOB_STATUSES as readonly string[]).includes(value))) {
+      problems.push({ field: 'status', message: `Choose from: ${JOB_STATUSES.join(', ')}` });
     }
     const crewId = query.crewId || null;
     if (crewId && !isUuid(crewId)) problems.push({ field: 'crewId', message: 'Choose a crew' });
@@ -156,13 +157,13 @@ export class JobsService {
     const rows = (await this.dataSource.query(
       `${JOB_SELECT}
        WHERE j.company_id = $1
-         AND ($2::text IS NULL OR j.status = $2)
+         AND ($2::text[] IS NULL OR j.status = ANY($2::text[]))
          AND ($3::uuid IS NULL OR j.crew_id = $3)
          AND ($4::date IS NULL OR j.planned_start IS NULL OR
               j.planned_start + (ceil(j.planned_crew_days) * 7 / 5 + 3)::int >= $4::date)
-         AND ($5::date IS NULL OR j.planned_start <= $5::date)
+         AND ($5::date IS NULL OR j.planned_start IS NULL OR j.planned_start <= $5::date)
        ORDER BY j.planned_start NULLS FIRST, e.number`,
-      [this.tenant.companyId, status, crewId, from, to],
+      [this.tenant.companyId, statuses, crewId, from, to],
     )) as JobRow[];
     // The SQL bound is generous (weekends); the exact working-day end is checked here.
     return rows

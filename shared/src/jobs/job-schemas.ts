@@ -100,7 +100,8 @@ export const quantityEntrySchema = z
     path: ['movement'],
   });
 
-export const logEntrySchema = z.union([hoursEntrySchema, quantityEntrySchema]);
+/** Told apart by `kind`, so a wrong entry's messages name its own fields rather than "Invalid input". */
+export const logEntrySchema = z.discriminatedUnion('kind', [hoursEntrySchema, quantityEntrySchema]);
 export type HoursEntry = z.infer<typeof hoursEntrySchema>;
 export type QuantityEntry = z.infer<typeof quantityEntrySchema>;
 export type LogEntry = HoursEntry | QuantityEntry;

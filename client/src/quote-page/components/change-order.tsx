@@ -35,7 +35,7 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
             <Text fz="sm" fw={600}>
               Why this change
             </Text>
-            <Text className="qp-scope">{reason}</Text>
+            <Text style={{ whiteSpace: 'pre-line' }}>{reason}</Text>
           </div>
         )}
         {change.lines.length > 0 && (

@@ -91,8 +91,19 @@ export function QuoteTitle({
           <>
             <dt>{kind === 'change' ? 'Sent' : 'Issued'}</dt>
             <dd>{formatDay(estimate.issuedAt)}</dd>
-            <dt>{kind === 'change' ? 'Answer by' : 'Valid until'}</dt>
-            <dd>{formatDay(estimate.expiresAt)}</dd>
+            {kind !== 'change' ? (
+              <>
+                <dt>Valid until</dt>
+                <dd>{formatDay(estimate.expiresAt)}</dd>
+              </>
+            ) : (
+              view.changeOrder?.state === 'open' && (
+                <>
+                  <dt>Answer by</dt>
+                  <dd>{formatDay(estimate.expiresAt)}</dd>
+                </>
+              )
+            )}
           </>
         )}
       </dl>

@@ -125,3 +125,66 @@ export function paidQuoteView(): QuoteView {
     paidAt: '2027-04-08T18:34:00.000Z',
   });
 }
+
+/** The version the change order was sent with (the estimate's next version). */
+export const CHANGE_SHA256 = 'c0ffee00d15ea5e0b00b0a7f11e2d3c4b5a6978877665544332211ffeeddcc01';
+
+/**
+ * A change order on the job made from the accepted quote (lighting chosen, deposit paid). Figures:
+ * the lines 1,450.00 + 330.00 = 1,780.00 before tax; tax at the quote's 3.4375 % = 61.1875 → 61.19;
+ * the change adds 1,841.19, taking the job from 13,292.25 to 15,133.44. The rest of the view is the
+ * whole job after the change: base 12,412.50 + 1,841.19 = 14,253.69 (13,780.00 before tax, the
+ * 500.00 discount already taken off, plus 412.50 + 61.19 = 473.69 tax).
+ */
+export function changeOrderQuoteView(state: 'open' | 'accepted' | 'declined' = 'open'): QuoteView {
+  const accepted = paidQuoteView();
+  return {
+    ...accepted,
+    estimate: { ...accepted.estimate, versionNumber: 3, contentSha256: CHANGE_SHA256 },
+    base: { priceBeforeTax: '13780.00', discount: '500.00', tax: '473.69', total: '14253.69' },
+    changeOrder: {
+      number: 2,
+      title: 'Bog filter and a longer planting shelf',
+      reason:
+        'The ground on the east side stays damp, which suits a bog filter: the plants clean the ' +
+        'water and the pump works less.',
+      lines: [
+        {
+          description: 'Bog filter bed with gravel and plants',
+          quantity: '1',
+          unit: 'ea',
+          price: '1450.00',
+        },
+        { description: 'Planting shelf, extended', quantity: '6.000', unit: 'ft', price: '330.00' },
+      ],
+      priceBeforeTax: '1780.00',
+      tax: '61.19',
+      total: '1841.19',
+      previousJobTotal: '13292.25',
+      newJobTotal: '15133.44',
+      state,
+      acceptedAt: state === 'accepted' ? '2027-06-03T17:20:00.000Z' : null,
+    },
+  };
+}
+
+/**
+ * The final invoice's link, after the change was accepted: 15,133.44 total, less the 3,987.68 deposit
+ * paid, leaves 11,145.76 to pay.
+ */
+export function invoiceQuoteView(
+  status: 'open' | 'paid' = 'open',
+  paidAt: string | null = status === 'paid' ? '2027-06-21T09:15:00.000Z' : null,
+): QuoteView {
+  return {
+    ...paidQuoteView(),
+    invoice: {
+      issuedAt: '2027-06-20T16:00:00.000Z',
+      total: '15133.44',
+      depositPaid: '3987.68',
+      balance: '11145.76',
+      status,
+      paidAt,
+    },
+  };
+}
