@@ -54,6 +54,12 @@ export function createAppRoutes(): RouteObject[] {
               }),
             },
             {
+              path: paths.learnedRates.path,
+              lazy: async () => ({
+                Component: (await import('./routes/app/learned-rates')).LearnedRatesRoute,
+              }),
+            },
+            {
               // Tables, the policy form and the CSV tools load with this chunk; charts load later still.
               path: paths.priceBook.path,
               lazy: async () => ({

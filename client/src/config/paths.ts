@@ -3,6 +3,8 @@ export const paths = {
   team: { path: '/team', getHref: () => '/team' },
   company: { path: '/company', getHref: () => '/company' },
   takeoff: { path: '/takeoff', getHref: () => '/takeoff' },
+  /** Static, so it outranks the price book's `/price-book/:tab?`. */
+  learnedRates: { path: '/price-book/learned-rates', getHref: () => '/price-book/learned-rates' },
   priceBook: {
     path: '/price-book/:tab?',
     getHref: (tab?: string) => (tab ? `/price-book/${tab}` : '/price-book'),

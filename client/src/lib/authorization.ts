@@ -9,6 +9,9 @@ export const AREA_ROLES = {
   priceBook: ['owner', 'estimator'],
   /** Changing prices, the policy and the book's CSV; estimators read the book. */
   priceBookEdit: ['owner'],
+  /** The crews' production rates learned from closed jobs; putting one in the book is the owner's. */
+  learnedRates: ['owner', 'estimator'],
+  learnedRatesAdopt: ['owner'],
   pricedTakeoffs: ['owner', 'estimator'],
   estimates: ['owner', 'estimator'],
   /** Crew leads read customers and sites for the job packet's access notes. */

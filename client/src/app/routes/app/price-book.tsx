@@ -1,4 +1,5 @@
-import { useNavigate, useParams } from 'react-router-dom';
+import { Anchor, Group } from '@mantine/core';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { RequireRole } from '@/features/auth/components/require-role';
@@ -24,12 +25,20 @@ function PriceBookPage() {
             : 'What things cost the company and the margin it needs. Every save is a new version, so past estimates keep the prices they were made with.'
         }
       />
+      <Group mt={-8} mb="md">
+        <Anchor component={Link} to={paths.learnedRates.getHref()} size="sm">
+          Crew rates from closed jobs
+        </Anchor>
+      </Group>
       <PriceBookWorkspace
         tab={isPriceBookTab(tab) ? tab : 'materials'}
         onTabChange={(next) => navigate(paths.priceBook.getHref(next))}
         readOnly={readOnly}
         isWithinPage={(pathname) =>
-          pathname === PRICE_BOOK_ROOT || pathname.startsWith(`${PRICE_BOOK_ROOT}/`)
+          pathname === PRICE_BOOK_ROOT ||
+          // The crew rates page sits under the book's path but is a page of its own: leaving for it
+          // would drop unsaved edits, so the guard asks.
+          (pathname.startsWith(`${PRICE_BOOK_ROOT}/`) && pathname !== paths.learnedRates.getHref())
         }
       />
     </>

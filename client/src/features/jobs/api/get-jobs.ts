@@ -8,6 +8,13 @@ export const jobKeys = {
   detail: (id: string) => [...jobKeys.all, 'detail', id] as const,
   /** Under the job's detail key, so refreshing the job (after logs or a move) refreshes its report. */
   report: (id: string) => [...jobKeys.all, 'detail', id, 'report'] as const,
+  // Beside the detail key, not under it: refreshing the job after an accepted change must not
+  // refetch the change orders that asked for it, nor every photo.
+  changeOrders: (id: string) => [...jobKeys.all, 'change-orders', id] as const,
+  invoice: (id: string) => [...jobKeys.all, 'invoice', id] as const,
+  photos: (id: string) => [...jobKeys.all, 'photos', id] as const,
+  /** One photo's image or thumbnail bytes, by its API path; they never change under that path. */
+  photoImage: (path: string) => [...jobKeys.all, 'photo-image', path] as const,
 };
 
 export type JobListParams = {

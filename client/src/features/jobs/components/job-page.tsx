@@ -5,9 +5,12 @@ import { useState } from 'react';
 import { ErrorPanel } from '@/components/error-panel';
 import { PageLoader } from '@/components/page-loader';
 import { useJob } from '../api/get-job';
+import { ChangeOrders } from './change-orders';
 import { DailyLogs } from './daily-logs';
+import { FinalInvoice } from './final-invoice';
 import { CrewBudgetView, JobBudgetView } from './job-budget';
 import { JobHeader } from './job-header';
+import { JobPhotos } from './job-photos';
 import { JobReport } from './job-report';
 import { JobStatusActions } from './job-status-actions';
 import { RescheduleModal } from './reschedule-modal';
@@ -34,6 +37,11 @@ function JobDetails({ job, access, logHref }: { job: JobView } & Omit<JobPagePro
   const [rescheduling, setRescheduling] = useState(false);
   // A finished job is not moved; its schedule history stays as it was.
   const movable = access.schedule && (job.status === 'scheduled' || job.status === 'in_progress');
+  // The final invoice follows the finished work (the server answers 409 JOB_NOT_COMPLETE before).
+  const invoiceable = access.money && (job.status === 'completed' || job.status === 'closed');
+  const [tab, setTab] = useState('plan');
+  // A tab can go away under the user (a job found not complete loses its invoice tab).
+  const shownTab = tab === 'invoice' && !invoiceable ? 'plan' : tab;
 
   return (
     <>
@@ -55,12 +63,15 @@ function JobDetails({ job, access, logHref }: { job: JobView } & Omit<JobPagePro
         }
       />
       {/* Panels mount only when chosen, so the cost report is fetched when someone opens it. */}
-      <Tabs defaultValue="plan" keepMounted={false}>
+      <Tabs value={shownTab} onChange={(value) => setTab(value ?? 'plan')} keepMounted={false}>
         <Tabs.List mb="md">
           <Tabs.Tab value="plan">{access.money ? 'Budget' : 'What to build'}</Tabs.Tab>
           <Tabs.Tab value="logs">Daily logs ({job.logs.length})</Tabs.Tab>
           <Tabs.Tab value="schedule">Schedule history</Tabs.Tab>
           {access.money && <Tabs.Tab value="report">Cost report</Tabs.Tab>}
+          {access.money && <Tabs.Tab value="changes">Change orders</Tabs.Tab>}
+          {invoiceable && <Tabs.Tab value="invoice">Final invoice</Tabs.Tab>}
+          <Tabs.Tab value="photos">Photos</Tabs.Tab>
         </Tabs.List>
         <Tabs.Panel value="plan">
           <Paper p="md">
@@ -88,6 +99,25 @@ function JobDetails({ job, access, logHref }: { job: JobView } & Omit<JobPagePro
             </Paper>
           </Tabs.Panel>
         )}
+        {access.money && (
+          <Tabs.Panel value="changes">
+            <Paper p="md">
+              <ChangeOrders job={job} />
+            </Paper>
+          </Tabs.Panel>
+        )}
+        {invoiceable && (
+          <Tabs.Panel value="invoice">
+            <Paper p="md">
+              <FinalInvoice job={job} />
+            </Paper>
+          </Tabs.Panel>
+        )}
+        <Tabs.Panel value="photos">
+          <Paper p="md">
+            <JobPhotos jobId={job.id} />
+          </Paper>
+        </Tabs.Panel>
       </Tabs>
       {movable && (
         <RescheduleModal opened={rescheduling} job={job} onClose={() => setRescheduling(false)} />
@@ -96,7 +126,10 @@ function JobDetails({ job, access, logHref }: { job: JobView } & Omit<JobPagePro
   );
 }
 
-/** One job: its header and actions, then the budget, logs, schedule history and cost report. */
+/**
+ * One job: its header and actions, then the budget, logs, schedule history, cost report, change
+ * orders, final invoice and photos.
+ */
 export function JobPage({ id, access, logHref }: JobPageProps) {
   const job = useJob(id);
   if (job.isPending) return <PageLoader label="Opening the job…" />;

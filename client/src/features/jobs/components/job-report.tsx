@@ -1,7 +1,9 @@
-import { Alert, Button, Group, List, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { Alert, Anchor, Button, Group, List, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconAlertTriangle, IconDownload } from '@tabler/icons-react';
 import type { JobCostReport } from '@pondwright/shared';
+import { Link } from 'react-router-dom';
 import { ErrorPanel } from '@/components/error-panel';
+import { paths } from '@/config/paths';
 import { formatMoney } from '@/lib/format';
 import { notifyApiError } from '@/lib/notify';
 import { useDownloadJobReport } from '../api/download-job-report';
@@ -77,7 +79,12 @@ export function JobReport({ job }: JobReportProps) {
             Job cost report
           </Title>
           <Text size="sm" c="dimmed">
-            The budget from the accepted quote against what the daily logs recorded.
+            The budget from the accepted quote against what the daily logs recorded. Closed jobs
+            teach the{' '}
+            <Anchor component={Link} to={paths.learnedRates.getHref()} inherit>
+              crew rates
+            </Anchor>
+            .
           </Text>
         </Stack>
         <Button

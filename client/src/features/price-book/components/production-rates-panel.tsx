@@ -1,6 +1,8 @@
-import { SimpleGrid, Text } from '@mantine/core';
+import { Anchor, SimpleGrid, Text } from '@mantine/core';
 import type { ProductionRates } from '@pondwright/shared/pricing';
+import { Link } from 'react-router-dom';
 import { NumberTextInput } from '@/components/number-text-input';
+import { paths } from '@/config/paths';
 import type { PriceBookDraft } from '../hooks/use-price-book-draft';
 import { PRODUCTION_RATE_LABELS } from '@/lib/price-book-labels';
 
@@ -14,6 +16,11 @@ export function ProductionRatesPanel({ draft, readOnly }: ProductionRatesPanelPr
     <>
       <Text size="sm" c="dimmed" mb="md">
         Tune these from your own finished jobs; every takeoff turns quantities into hours with them.
+        The{' '}
+        <Anchor component={Link} to={paths.learnedRates.getHref()} inherit>
+          crew rates from closed jobs
+        </Anchor>{' '}
+        show what the crews really achieved.
       </Text>
       <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="md">
         {keys.map((key) => (

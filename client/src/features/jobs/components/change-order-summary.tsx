@@ -1,0 +1,63 @@
+import { Group, Stack, Table, Text } from '@mantine/core';
+import type { ChangeOrderView } from '@pondwright/shared';
+import { formatMoney } from '@/lib/format';
+
+function Figure({ label, value }: { label: string; value: string }) {
+  return (
+    <Stack gap={0}>
+      <Text size="xs" c="dimmed">
+        {label}
+      </Text>
+      <Text fw={600} ff="monospace" aria-label={label}>
+        {value}
+      </Text>
+    </Stack>
+  );
+}
+
+/** A priced change: its lines at their prices, what it adds and the job's total before and after. */
+export function ChangeOrderSummary({
+  order,
+  currency,
+}: {
+  order: ChangeOrderView;
+  currency: string;
+}) {
+  const money = (amount: string) => formatMoney(amount, currency);
+  return (
+    <Stack gap="sm">
+      <Table aria-label={`Lines of change order ${order.number}`} verticalSpacing={4}>
+        <Table.Thead>
+          <Table.Tr>
+            <Table.Th>Item</Table.Th>
+            <Table.Th ta="right">Quantity</Table.Th>
+            <Table.Th ta="right">Price</Table.Th>
+          </Table.Tr>
+        </Table.Thead>
+        <Table.Tbody>
+          {order.lines.map((line, index) => (
+            <Table.Tr key={index}>
+              <Table.Td>{line.description}</Table.Td>
+              <Table.Td ta="right">
+                {line.quantity} {line.unit}
+              </Table.Td>
+              <Table.Td ta="right" ff="monospace">
+                {money(line.price)}
+              </Table.Td>
+            </Table.Tr>
+          ))}
+        </Table.Tbody>
+      </Table>
+      <Group gap="xl">
+        <Figure label="Before tax" value={money(order.priceBeforeTax)} />
+        <Figure label="Tax" value={money(order.tax)} />
+        <Figure label="The change adds" value={money(order.total)} />
+        {order.cost !== null && <Figure label="Its cost" value={money(order.cost)} />}
+      </Group>
+      <Text size="sm" aria-label="Job total">
+        Job total {money(order.previousJobTotal)} → <b>{money(order.newJobTotal)}</b> once the
+        homeowner accepts.
+      </Text>
+    </Stack>
+  );
+}
