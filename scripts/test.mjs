@@ -3,22 +3,17 @@
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import {
-  appWebhookUrl,
   buildClient,
   buildServer,
   buildShared,
   databaseEnv,
   ensureChromium,
   ensureDependencies,
-  fakePorts,
   log,
-  migrateAndSeed,
   repoRoot,
   startDatabase,
-  startFakes,
-  startServer,
-  stopProcess,
   tryRun,
+  withEndToEndServer,
 } from './lib/setup.mjs';
 
 const reportDir = join(repoRoot, '.data/test-reports');
@@ -69,48 +64,13 @@ async function endToEnd() {
     record('end-to-end', 0, 1);
     return;
   }
-  const testDatabase = databaseEnv().DB_TEST_NAME;
-  migrateAndSeed(testDatabase);
-  const port = Number(process.env.E2E_PORT ?? 3100);
-  let server;
-  let fakes;
-  const stopAll = async () => {
-    await stopProcess(server?.child);
-    await fakes?.stop();
-  };
-  // Stopped with the run: the fakes and the server must not outlive an interrupted test.
-  const onSignal = () => stopAll().then(() => process.exit(130));
-  process.once('SIGINT', onSignal);
-  process.once('SIGTERM', onSignal);
   try {
-    // Ports apart from `npm start`'s, so the tests can run while the app is up.
-    fakes = await startFakes({
-      ...fakePorts({ smtpPort: 2526, mailboxPort: 2581, paymentsPort: 12112, s3Port: 4570 }),
-      webhookUrl: appWebhookUrl(port),
-      quiet: true,
-    });
-    server = await startServer({
-      port,
-      databaseName: testDatabase,
-      quiet: true,
-      extraEnv: {
-        LOG_LEVEL: 'warn',
-        PUBLIC_APP_URL: `http://127.0.0.1:${port}`,
-        ...fakes.serverEnv,
-      },
-    });
-    vitestSuite('end-to-end', 'client', ['--config', 'vitest.e2e.config.ts'], {
-      E2E_BASE_URL: server.url,
-      MAILBOX_URL: fakes.mailboxUrl,
-      FAKE_PAYMENTS_URL: fakes.paymentsUrl,
-    });
+    await withEndToEndServer((env) =>
+      vitestSuite('end-to-end', 'client', ['--config', 'vitest.e2e.config.ts'], env),
+    );
   } catch (error) {
     log(`end-to-end set-up failed: ${error.message}`);
     record('end-to-end', 0, 1);
-  } finally {
-    await stopAll();
-    process.off('SIGINT', onSignal);
-    process.off('SIGTERM', onSignal);
   }
 }
 

@@ -1,13 +1,10 @@
 import { PDFParse } from 'pdf-parse';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { api, approvedEstimateWithAddOn, ESTIMATOR, quoteLinkIn, waitForMail } from './support/api';
 import { baseUrl, launchBrowser, screenshot } from './support/browser';
 
-// The seeded demo people and one of the demo customers (server/src/seed).
-const ESTIMATOR = { email: 'estimator@heronmoss.example', password: 'pond-estimator-2026' };
-const OWNER = { email: 'owner@heronmoss.example', password: 'pond-owner-2026' };
 const HOMEOWNER_EMAIL = 'bram.homeowner@example.test';
-const mailboxUrl = process.env.MAILBOX_URL ?? 'http://127.0.0.1:2581';
 
 let browser: Browser;
 
@@ -18,104 +15,11 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function api<T>(path: string, token: string | null, init: RequestInit = {}): Promise<T> {
-  const response = await fetch(`${baseUrl}${path}`, {
-    ...init,
-    headers: {
-      'Content-Type': 'application/json',
-      ...(token ? { Authorization: `Bearer ${token}` } : {}),
-      ...init.headers,
-    },
-  });
-  if (!response.ok) throw new Error(`${path}: ${response.status} ${await response.text()}`);
-  return (await response.json()) as T;
-}
-
-async function signInApi(person: { email: string; password: string }): Promise<string> {
-  const body = await api<{ accessToken: string }>('/api/auth/login', null, {
-    method: 'POST',
-    body: JSON.stringify(person),
-    headers: { 'X-Forwarded-For': '198.51.100.20' },
-  });
-  return body.accessToken;
-}
-
-type Estimate = {
-  id: string;
-  number: number;
-  status: string;
-  draft: { revision: number; content: Record<string, unknown> };
-};
-
-/**
- * An approved estimate for the demo customer with one add-on the homeowner can choose, made through
- * the API: this journey is about the homeowner, the estimate journey covers building one by hand.
- */
-async function approvedEstimateWithAddOn(title: string): Promise<Estimate> {
-  const estimator = await signInApi(ESTIMATOR);
-  const customers = await api<{ items: Array<{ id: string; name: string }> }>(
-    '/api/customers?q=Thistlewood',
-    estimator,
+/** Waits for the quote e-mail of this estimate to reach the fake SMTP server; answers its text. */
+function quoteMail(estimateNumber: number): Promise<string> {
+  return waitForMail(
+    (m) => m.subject.includes(`No. ${estimateNumber})`) && m.to.includes(HOMEOWNER_EMAIL),
   );
-  const customer = customers.items.find((c) => c.name === 'Bram Thistlewood')!;
-  const created = await api<Estimate>('/api/estimates', estimator, {
-    method: 'POST',
-    body: JSON.stringify({ title, customerId: customer.id }),
-  });
-  const saved = await api<Estimate>(`/api/estimates/${created.id}/draft`, estimator, {
-    method: 'PUT',
-    body: JSON.stringify({
-      ...created.draft.content,
-      revision: created.draft.revision,
-      scope: 'A lined pond with a stream and a waterfall by the terrace.',
-      manualLines: [
-        {
-          id: 'bubbler',
-          category: 'materials',
-          description: 'Bubbling urn beside the stream',
-          quantity: '1',
-          unit: 'ea',
-          unitCost: '350.00',
-          taxable: true,
-          kind: 'add-on',
-        },
-      ],
-    }),
-  });
-  let estimate = await api<Estimate>(`/api/estimates/${created.id}/finalise`, estimator, {
-    method: 'POST',
-    body: JSON.stringify({ revision: saved.draft.revision }),
-  });
-  if (estimate.status === 'awaiting_approval') {
-    estimate = await api<Estimate>(`/api/estimates/${created.id}/approve`, await signInApi(OWNER), {
-      method: 'POST',
-    });
-  }
-  expect(estimate.status).toBe('approved');
-  return estimate;
-}
-
-/** Waits for the outbox worker to deliver the quote e-mail to the fake SMTP server; answers its text. */
-async function quoteMail(estimateNumber: number): Promise<string> {
-  let text = '';
-  await expect
-    .poll(
-      async () => {
-        const messages = (await (await fetch(`${mailboxUrl}/messages`)).json()) as Array<{
-          subject: string;
-          text: string;
-          to: string[];
-        }>;
-        const mail = messages.find(
-          (m) => m.subject.includes(`No. ${estimateNumber})`) && m.to.includes(HOMEOWNER_EMAIL),
-        );
-        text = mail?.text ?? '';
-        return text.length > 0;
-      },
-      { timeout: 20_000, interval: 500 },
-    )
-    .toBe(true);
-  return text;
 }
 
 const usd = (amount: string) =>
@@ -140,9 +44,7 @@ describe('the homeowner’s quote, from e-mail to deposit', () => {
     await staff.getByRole('button', { name: 'Resend' }).waitFor();
 
     // The homeowner opens the link from the captured e-mail on a phone.
-    const link = /(https?:\/\/\S+\/q\/[A-Za-z0-9_-]{43})/.exec(
-      await quoteMail(estimate.number),
-    )![1]!;
+    const link = quoteLinkIn(await quoteMail(estimate.number));
     const token = link.split('/q/')[1]!;
     const phone = await (
       await browser.newContext({

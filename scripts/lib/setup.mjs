@@ -283,3 +283,49 @@ export function ensureChromium() {
     candidates.some((path) => existsSync(path))
   );
 }
+
+/**
+ * The built app against the migrated and seeded test database, with its local fakes, on ports apart
+ * from `npm start`'s (E2E_PORT, 3100 by default); `run` gets the environment the browser tests read.
+ * Everything is stopped afterwards, and on Ctrl-C.
+ */
+export async function withEndToEndServer(run) {
+  const testDatabase = databaseEnv().DB_TEST_NAME;
+  migrateAndSeed(testDatabase);
+  const port = Number(process.env.E2E_PORT ?? 3100);
+  let server;
+  let fakes;
+  const stopAll = async () => {
+    await stopProcess(server?.child);
+    await fakes?.stop();
+  };
+  const onSignal = () => stopAll().then(() => process.exit(130));
+  process.once('SIGINT', onSignal);
+  process.once('SIGTERM', onSignal);
+  try {
+    fakes = await startFakes({
+      ...fakePorts({ smtpPort: 2526, mailboxPort: 2581, paymentsPort: 12112, s3Port: 4570 }),
+      webhookUrl: appWebhookUrl(port),
+      quiet: true,
+    });
+    server = await startServer({
+      port,
+      databaseName: testDatabase,
+      quiet: true,
+      extraEnv: {
+        LOG_LEVEL: 'warn',
+        PUBLIC_APP_URL: `http://127.0.0.1:${port}`,
+        ...fakes.serverEnv,
+      },
+    });
+    return await run({
+      E2E_BASE_URL: server.url,
+      MAILBOX_URL: fakes.mailboxUrl,
+      FAKE_PAYMENTS_URL: fakes.paymentsUrl,
+    });
+  } finally {
+    await stopAll();
+    process.off('SIGINT', onSignal);
+    process.off('SIGTERM', onSignal);
+  }
+}
