@@ -21,6 +21,7 @@ import { Estimate } from '../estimates/entities/estimate.entity';
 import { versionSha256 } from '../estimates/content-hash';
 import { priceEstimateContent, type UncheckedContent } from '../estimates/price-estimate';
 import { Job } from '../jobs/entities/job.entity';
+import { findCompanyJob } from '../jobs/find-job';
 import { OutboxService } from '../mail/outbox.service';
 import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
 import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
@@ -268,15 +269,8 @@ export class ChangeOrdersService {
     };
   }
 
-  private async findJob(manager: EntityManager, id: string, lock = false): Promise<Job> {
-    const job = isUuid(id)
-      ? await manager.findOne(Job, {
-          where: { id, companyId: this.tenant.companyId },
-          ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
-        })
-      : null;
-    if (!job) throw new AppError('NOT_FOUND', 'Job not found');
-    return job;
+  private findJob(manager: EntityManager, id: string, lock = false): Promise<Job> {
+    return findCompanyJob(manager, id, this.tenant.companyId, lock);
   }
 }
 

@@ -6,12 +6,12 @@ import { DataSource, IsNull, Not, type EntityManager } from 'typeorm';
 import { hashToken, newSecureToken } from '../auth/secure-token';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
-import { isUuid } from '../common/tenancy/tenant-repository';
 import { parseBody } from '../common/validation/parse-body';
 import { AppConfig } from '../config/app-config';
 import { Company } from '../companies/entities/company.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { Job } from '../jobs/entities/job.entity';
+import { findCompanyJob } from '../jobs/find-job';
 import { OutboxService } from '../mail/outbox.service';
 import { Payment } from '../payments/entities/payment.entity';
 import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
@@ -153,14 +153,7 @@ export class InvoicesService {
     };
   }
 
-  private async findJob(manager: EntityManager, id: string, lock = false): Promise<Job> {
-    const job = isUuid(id)
-      ? await manager.findOne(Job, {
-          where: { id, companyId: this.tenant.companyId },
-          ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
-        })
-      : null;
-    if (!job) throw new AppError('NOT_FOUND', 'Job not found');
-    return job;
+  private findJob(manager: EntityManager, id: string, lock = false): Promise<Job> {
+    return findCompanyJob(manager, id, this.tenant.companyId, lock);
   }
 }

@@ -24,6 +24,7 @@ import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
 import { recordEstimateEvent } from '../quotes/estimate-events';
 import { JobScheduleChange } from './entities/job-schedule-change.entity';
 import { Job } from './entities/job.entity';
+import { findCompanyJob } from './find-job';
 import { budgetFromAcceptance } from './job-budget';
 import { JobLogsService } from './job-logs.service';
 import { plannedEnd } from './working-days';
@@ -293,23 +294,12 @@ export class JobsService {
   }
 
   /** The company's job, or a 404. */
-  async findJob(id: string, manager: EntityManager = this.dataSource.manager): Promise<Job> {
-    const job = isUuid(id)
-      ? await manager.findOneBy(Job, { id, companyId: this.tenant.companyId })
-      : null;
-    if (!job) throw new AppError('NOT_FOUND', 'Job not found');
-    return job;
+  findJob(id: string, manager: EntityManager = this.dataSource.manager): Promise<Job> {
+    return findCompanyJob(manager, id, this.tenant.companyId);
   }
 
-  private async lockJob(manager: EntityManager, id: string): Promise<Job> {
-    const job = isUuid(id)
-      ? await manager.findOne(Job, {
-          where: { id, companyId: this.tenant.companyId },
-          lock: { mode: 'pessimistic_write' },
-        })
-      : null;
-    if (!job) throw new AppError('NOT_FOUND', 'Job not found');
-    return job;
+  private lockJob(manager: EntityManager, id: string): Promise<Job> {
+    return findCompanyJob(manager, id, this.tenant.companyId, true);
   }
 
   private async checkCrew(manager: EntityManager, crewId: string | null): Promise<string | null> {

@@ -10,6 +10,7 @@ import { isUuid } from '../common/tenancy/tenant-repository';
 import { parseBody } from '../common/validation/parse-body';
 import { AppConfig } from '../config/app-config';
 import { Job } from '../jobs/entities/job.entity';
+import { findCompanyJob } from '../jobs/find-job';
 import { JobLog } from '../jobs/entities/job-log.entity';
 import { JobPhoto } from './entities/job-photo.entity';
 import { imageTypeOf } from './image-type';
@@ -177,12 +178,8 @@ export class PhotosService {
     ]);
   }
 
-  private async findJob(id: string): Promise<Job> {
-    const job = isUuid(id)
-      ? await this.dataSource.manager.findOneBy(Job, { id, companyId: this.tenant.companyId })
-      : null;
-    if (!job) throw new AppError('NOT_FOUND', 'Job not found');
-    return job;
+  private findJob(id: string): Promise<Job> {
+    return findCompanyJob(this.dataSource.manager, id, this.tenant.companyId);
   }
 }
 

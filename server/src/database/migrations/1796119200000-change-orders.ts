@@ -33,7 +33,9 @@ export class ChangeOrders1796119200000 implements MigrationInterface {
       `CREATE UNIQUE INDEX change_orders_job_number_key ON change_orders (job_id, number)`,
     );
     await queryRunner.query(`CREATE INDEX change_orders_company_idx ON change_orders (company_id)`);
-    await queryRunner.query(`CREATE INDEX change_orders_created_by_idx ON change_orders (created_by)`);
+    await queryRunner.query(
+      `CREATE INDEX change_orders_created_by_idx ON change_orders (created_by)`,
+    );
     await queryRunner.query(
       `ALTER TABLE quote_links ADD COLUMN change_order_id uuid REFERENCES change_orders(id) ON DELETE CASCADE`,
     );
