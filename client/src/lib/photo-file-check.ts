@@ -1,3 +1,5 @@
+// Here in lib because the office's uploader (features/jobs) and the crew's daily log check files alike.
+
 /** What the server stores: JPEG, PNG or WebP, at most 15 MB (`PHOTO_MAX_BYTES`). */
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
 export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
@@ -16,7 +18,7 @@ function looksLikePhoto(head: Uint8Array): boolean {
   );
 }
 
-function readHead(file: File): Promise<Uint8Array> {
+function readHead(file: Blob): Promise<Uint8Array> {
   const head = file.slice(0, 12);
   if (typeof head.arrayBuffer === 'function') {
     return head.arrayBuffer().then((buffer) => new Uint8Array(buffer));

@@ -2,16 +2,20 @@ import { Alert, Button, Paper, Stack, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import type { DailyLogView } from '@pondwright/shared';
 import { IconDeviceFloppy } from '@tabler/icons-react';
-import { useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import { notifyError, notifySuccess } from '@/lib/notify';
+import { useLogPhotos } from '../hooks/use-log-photos';
 import { useOutbox } from '../hooks/use-outbox';
 import { readDraft, writeDraft, type LogDraft } from '../storage/draft-store';
 import { outboxSync } from '../sync/outbox-sync';
+import { photoSync } from '../sync/photo-sync';
 import type { CrewLine } from '../utils/crew-budget';
 import { checkLog, problemToErrors, type LogValues } from '../utils/log-values';
 import { ConflictPanel } from './conflict-panel';
 import { LogEntries } from './log-entries';
+import { LogPhotos } from './log-photos';
 import { LogStatus } from './log-status';
+import { PhotoAdderContext } from './photo-adder';
 import { RejectedPanel } from './rejected-panel';
 
 export type DailyLogFormProps = {
@@ -57,6 +61,13 @@ export function DailyLogForm(props: DailyLogFormProps) {
 
   useEffect(() => outboxSync.onSaved((log) => log.id === logId && setLastSaved(log)), [logId]);
 
+  // A photo may go at once only when the server has the day's log (revision 0: never stored).
+  const logOnServer = useCallback(
+    () => (readDraft(draftKey)?.baseRevision ?? initial.baseRevision) > 0,
+    [draftKey, initial.baseRevision],
+  );
+  const photos = useLogPhotos({ jobId, logId, userId, logOnServer });
+
   // The server's field messages go on the fields once per refusal, wherever those rows now are.
   const shownProblem = useRef<string | null>(null);
   useEffect(() => {
@@ -99,6 +110,8 @@ export function DailyLogForm(props: DailyLogFormProps) {
     } finally {
       setSaving(false);
     }
+    // The day's photos waited for the log; they follow it now, without holding up the save button.
+    void photoSync.syncNow(userId);
     const after = outboxSync.getSnapshot().items.find((queued) => queued.logId === logId);
     if (!after) notifySuccess('The day’s log is saved.');
     else if (after.status === 'waiting') {
@@ -133,7 +146,11 @@ export function DailyLogForm(props: DailyLogFormProps) {
         <RejectedPanel item={item} onDiscard={() => outboxSync.drop(logId)} />
       )}
 
-      <LogEntries form={form} lines={lines} people={people} />
+      <PhotoAdderContext.Provider value={photos.add}>
+        <LogEntries form={form} lines={lines} people={people} />
+      </PhotoAdderContext.Provider>
+
+      <LogPhotos queue={photos} />
 
       <Paper p="sm">
         <Textarea

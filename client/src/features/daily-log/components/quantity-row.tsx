@@ -110,7 +110,7 @@ export function QuantityRow({ form, index, number, entry, lines }: QuantityRowPr
           />
         </Group>
         {entry.kind === 'material' && entry.movement === 'delivered' && (
-          <DeliveryFields form={form} path={path} />
+          <DeliveryFields form={form} path={path} ticketNumber={entry.ticketNumber} />
         )}
       </Stack>
     </Paper>

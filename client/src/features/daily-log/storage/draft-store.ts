@@ -52,3 +52,14 @@ export function rebaseDrafts(logId: string, from: number | null, to: number): vo
     writeDraft(key, { ...draft, baseRevision: to });
   }
 }
+
+/**
+ * The server has stored this log at least once: a draft edited from a server revision (revision 0
+ * is "never stored"), moved on by this phone's own successful sends.
+ */
+export function isLogOnServer(logId: string): boolean {
+  return entriesUnder(DRAFTS).some(([key]) => {
+    const draft = readDraft(key);
+    return draft?.logId === logId && draft.baseRevision > 0;
+  });
+}

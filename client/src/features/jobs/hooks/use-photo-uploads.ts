@@ -5,7 +5,7 @@ import { errorMessage } from '@/lib/api-error';
 import { jobKeys } from '../api/get-jobs';
 import { uploadPhoto } from '../api/upload-photo';
 import { newId } from '../utils/new-id';
-import { photoFileProblem } from '../utils/photo-file-check';
+import { photoFileProblem } from '@/lib/photo-file-check';
 
 export type UploadStatus = 'checking' | 'refused' | 'waiting' | 'uploading' | 'done' | 'failed';
 
