@@ -45,9 +45,11 @@ export function LogPhotos({ queue }: { queue: ReturnType<typeof useLogPhotos> })
             onChange={(value) => setKind(value as PhotoKind)}
           />
         </Stack>
-        <Group grow gap="xs">
+        {/* One button a row: side by side, their labels are cut off on a 360 px phone. */}
+        <Stack gap="xs">
           <PhotoFileButton
             size="md"
+            fullWidth
             camera
             inputLabel="Photo from the camera"
             leftSection={<IconCamera size={18} />}
@@ -58,6 +60,7 @@ export function LogPhotos({ queue }: { queue: ReturnType<typeof useLogPhotos> })
           <PhotoFileButton
             size="md"
             variant="default"
+            fullWidth
             multiple
             inputLabel="Photos from this phone"
             leftSection={<IconPhotoPlus size={18} />}
@@ -65,7 +68,7 @@ export function LogPhotos({ queue }: { queue: ReturnType<typeof useLogPhotos> })
           >
             Choose photos
           </PhotoFileButton>
-        </Group>
+        </Stack>
         <Text size="xs" c="dimmed">
           JPEG, PNG or WebP, at most 15 MB each. Kept on this phone and sent after the day’s log.
         </Text>
