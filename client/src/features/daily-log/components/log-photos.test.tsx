@@ -46,7 +46,8 @@ async function typeHoursRow(user: User) {
   await user.type(within(row).getByLabelText('Hours'), '8');
 }
 
-const photoList = () => screen.getByRole('list', { name: 'Photos not sent yet' });
+/** Found once the photo's bytes are checked and stored, which takes a moment on a busy machine. */
+const photoList = () => screen.findByRole('list', { name: 'Photos not sent yet' });
 
 /** jsdom has no object URLs; the stand-ins are removed again after each test. */
 const realObjectUrls = { create: URL.createObjectURL, revoke: URL.revokeObjectURL };
@@ -73,10 +74,10 @@ describe('photos in the daily log', () => {
     await typeHoursRow(first.user);
     await first.user.upload(screen.getByLabelText('Photos from this phone'), jpeg('pond.jpg'));
 
-    expect(await within(photoList()).findByText('Waiting to send')).toBeInTheDocument();
+    expect(await within(await photoList()).findByText('Waiting to send')).toBeInTheDocument();
     const [queued] = await readQueuedPhotos();
     expect(queued).toMatchObject({ logId: typedLogId(), kind: 'progress', status: 'waiting' });
-    expect(screen.getByRole('button', { name: '1 photo not sent yet' })).toBeInTheDocument();
+    expect(await screen.findByRole('button', { name: '1 photo not sent yet' })).toBeInTheDocument();
 
     // A reload: the page and the sender's memory are gone, the phone's storage is not.
     first.unmount();
@@ -163,11 +164,11 @@ describe('photos in the daily log', () => {
       code: 'PHOTO_TOO_LARGE',
     });
 
-    expect(await within(photoList()).findByRole('alert')).toHaveTextContent(
+    expect(await within(await photoList()).findByRole('alert')).toHaveTextContent(
       `Not accepted: ${message}`,
     );
     expect(await readQueuedPhotos()).toMatchObject([{ status: 'failed', message }]);
-    await user.click(within(photoList()).getByRole('button', { name: 'Remove Progress' }));
+    await user.click(within(await photoList()).getByRole('button', { name: 'Remove Progress' }));
     await waitFor(async () => expect(await readQueuedPhotos()).toEqual([]));
     expect(FakeXhr.sent).toHaveLength(1);
   });
@@ -185,7 +186,9 @@ describe('photos in the daily log', () => {
       jpeg('ticket.jpg'),
     );
 
-    expect(await within(photoList()).findByText('Ticket · Ticket T-4471')).toBeInTheDocument();
+    expect(
+      await within(await photoList()).findByText('Ticket · Ticket T-4471'),
+    ).toBeInTheDocument();
     expect(await readQueuedPhotos()).toMatchObject([
       { kind: 'ticket', caption: 'Ticket T-4471', logId: typedLogId(), status: 'waiting' },
     ]);
