@@ -9,7 +9,7 @@ import { clearQueuedPhotos, readQueuedPhotos } from '../storage/photo-store';
 import { outboxSync } from '../sync/outbox-sync';
 import { photoSync } from '../sync/photo-sync';
 import { buildCrewJob, buildLog, JOB_ID } from '../testing/build-job';
-import { FakeXhr, formFields, stubXhr } from '../testing/fake-xhr';
+import { FakeXhr, formFields, stubXhr } from '@/testing/fake-xhr';
 
 const crewLead = buildCurrentUser({ name: 'Cal Crewlead', role: 'crew_lead' });
 const DAY = '2026-03-04';

@@ -6,7 +6,7 @@ import { json, mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
 import { buildJob } from '../testing/build-job';
 import { buildPhoto } from '../testing/build-job-extras';
-import { FakeXhr, formFields, stubXhr } from '../testing/fake-xhr';
+import { FakeXhr, formFields, stubXhr } from '@/testing/fake-xhr';
 import { JobPhotos } from './job-photos';
 
 const ID = buildJob().id;
