@@ -2,8 +2,9 @@ import { act } from '@testing-library/react';
 import { vi } from 'vitest';
 
 /**
- * A stand-in for XMLHttpRequest, which the photo uploads (office and daily log) use for its progress events: each request
- * is kept so a test can read what was sent, report progress and answer it.
+ * A stand-in for XMLHttpRequest, which the photo uploads (office and daily log) use for their
+ * progress events: each request is kept so a test can read what was sent, report progress and
+ * answer it.
  */
 export class FakeXhr {
   static sent: FakeXhr[] = [];
