@@ -349,11 +349,13 @@ export class PublicQuotesService {
         'We could not find this quote. Check that the whole link was copied from the e-mail.',
       );
     }
-    const company = await manager.findOneByOrFail(Company, { id: link.companyId });
+    // The company is named only in the refusals: a usable link (every poll of the page) skips the read.
+    const companyName = async () =>
+      (await manager.findOneByOrFail(Company, { id: link.companyId })).name;
     if (link.revokedAt) {
       throw new AppError(
         'QUOTE_LINK_REVOKED',
-        `This link was withdrawn by ${company.name}, usually because the quote was updated. Ask them for the current one.`,
+        `This link was withdrawn by ${await companyName()}, usually because the quote was updated. Ask them for the current one.`,
       );
     }
     if (link.expiresAt.getTime() <= Date.now()) {
@@ -362,7 +364,7 @@ export class PublicQuotesService {
         await expireLapsedQuotes(manager, link.estimateId);
         throw new AppError(
           'QUOTE_LINK_EXPIRED',
-          `This quote expired on ${link.expiresAt.toISOString().slice(0, 10)}. Ask ${company.name} for an updated one.`,
+          `This quote expired on ${link.expiresAt.toISOString().slice(0, 10)}. Ask ${await companyName()} for an updated one.`,
         );
       }
     }
