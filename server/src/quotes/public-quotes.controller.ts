@@ -3,7 +3,8 @@ import { ApiBody, ApiTags } from '@nestjs/swagger';
 import type { CheckoutRedirect, QuoteView } from '@pondwright/shared';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/auth.decorators';
-import { PublicQuotesService, type RequestMeta } from './public-quotes.service';
+import type { RequestMeta } from './public-link';
+import { PublicQuotesService } from './public-quotes.service';
 import { acceptQuoteBodyDoc, declineQuoteBodyDoc } from './dto/quote.dto';
 import { sendPdf } from './send-pdf';
 

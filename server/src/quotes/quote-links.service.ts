@@ -16,7 +16,7 @@ import { Company } from '../companies/entities/company.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
-import { lockEstimate } from '../estimates/lock-estimate';
+import { findEstimate, lockEstimate } from '../estimates/lock-estimate';
 import { parseBody } from '../common/validation/parse-body';
 import { OutboxService } from '../mail/outbox.service';
 import { User } from '../users/entities/user.entity';
@@ -157,7 +157,7 @@ export class QuoteLinksService {
 
   async status(estimateId: string): Promise<EstimateQuoteStatus> {
     const manager = this.dataSource.manager;
-    const estimate = await this.findEstimate(manager, estimateId);
+    const estimate = await findEstimate(manager, estimateId, this.tenant.companyId);
     const [links, records] = await Promise.all([
       manager.find(QuoteLink, {
         where: { estimateId: estimate.id, companyId: estimate.companyId },
@@ -192,14 +192,6 @@ export class QuoteLinksService {
         : null,
       payment: records.payment ? staffPaymentView(records.payment) : null,
     };
-  }
-
-  private async findEstimate(manager: EntityManager, id: string): Promise<Estimate> {
-    const estimate = isUuid(id)
-      ? await manager.findOneBy(Estimate, { id, companyId: this.tenant.companyId })
-      : null;
-    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
-    return estimate;
   }
 
   /** The quote e-mail queued with each link (its PDF attachment names the link). */

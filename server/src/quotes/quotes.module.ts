@@ -7,6 +7,9 @@ import { PaymentsModule } from '../payments/payments.module';
 import { QuoteLink } from './entities/quote-link.entity';
 import { EstimateQuoteController } from './estimate-quote.controller';
 import { PublicQuotesController } from './public-quotes.controller';
+import { PublicInvoiceLinkService } from './public-invoice-link.service';
+import { PublicQuoteLinkService } from './public-quote-link.service';
+import { renderPublicQuotePdf } from './public-quote-view';
 import { PublicQuotesService } from './public-quotes.service';
 import { QuoteExpiryService } from './quote-expiry.service';
 import { QuoteLinksService } from './quote-links.service';
@@ -18,6 +21,8 @@ import { StaffQuotePdfService } from './staff-quote-pdf.service';
   providers: [
     QuoteLinksService,
     PublicQuotesService,
+    PublicQuoteLinkService,
+    PublicInvoiceLinkService,
     StaffQuotePdfService,
     QuoteExpiryService,
     ChangeOrderAnswers,
@@ -27,17 +32,15 @@ import { StaffQuotePdfService } from './staff-quote-pdf.service';
 export class QuotesModule implements OnModuleInit {
   constructor(
     private readonly attachments: MailAttachments,
-    private readonly quotes: PublicQuotesService,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
   /** The quote e-mail's PDF is rendered when the e-mail is sent, from the link it was queued with. */
   onModuleInit(): void {
     this.attachments.register('quote-pdf', async (attachment) => {
-      const link = await this.dataSource.manager.findOneByOrFail(QuoteLink, {
-        id: attachment.linkId,
-      });
-      const pdf = await this.quotes.pdfForLink(link);
+      const manager = this.dataSource.manager;
+      const link = await manager.findOneByOrFail(QuoteLink, { id: attachment.linkId });
+      const pdf = await renderPublicQuotePdf(manager, link);
       return { filename: attachment.filename, content: pdf.bytes, contentType: 'application/pdf' };
     });
   }

@@ -3,12 +3,11 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
-import { isUuid } from '../common/tenancy/tenant-repository';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
-import { Estimate } from '../estimates/entities/estimate.entity';
+import { findEstimate } from '../estimates/lock-estimate';
 import { QuoteAcceptance } from './entities/quote-acceptance.entity';
 import { QuoteLink } from './entities/quote-link.entity';
-import { PublicQuotesService } from './public-quotes.service';
+import { renderPublicQuotePdf } from './public-quote-view';
 
 /** Days a preview PDF (of a version not sent yet) says it is good for, as a new link would. */
 const PREVIEW_VALID_DAYS = 30;
@@ -22,7 +21,6 @@ export class StaffQuotePdfService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly tenant: TenantContext,
-    private readonly quotes: PublicQuotesService,
   ) {}
 
   async forEstimate(
@@ -30,10 +28,7 @@ export class StaffQuotePdfService {
     actorId: string,
   ): Promise<{ filename: string; bytes: Buffer }> {
     const manager = this.dataSource.manager;
-    const estimate = isUuid(estimateId)
-      ? await manager.findOneBy(Estimate, { id: estimateId, companyId: this.tenant.companyId })
-      : null;
-    if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
+    const estimate = await findEstimate(manager, estimateId, this.tenant.companyId);
     const acceptance = await manager.findOneBy(QuoteAcceptance, { estimateId: estimate.id });
     const link = acceptance
       ? await manager.findOneByOrFail(QuoteLink, { id: acceptance.linkId })
@@ -41,7 +36,7 @@ export class StaffQuotePdfService {
           where: { estimateId: estimate.id },
           order: { createdAt: 'DESC' },
         });
-    if (link) return this.quotes.pdfForLink(link);
+    if (link) return renderPublicQuotePdf(manager, link);
     const version = await manager.findOne(EstimateVersion, {
       where: { estimateId: estimate.id },
       order: { versionNumber: 'DESC' },
@@ -59,6 +54,6 @@ export class StaffQuotePdfService {
       createdAt: now,
       expiresAt: new Date(now.getTime() + PREVIEW_VALID_DAYS * 86_400_000),
     });
-    return this.quotes.pdfForLink(preview);
+    return renderPublicQuotePdf(manager, preview);
   }
 }
