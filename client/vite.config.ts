@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import { defineConfig, type Connect, type Plugin } from 'vite';
+import { VitePWA } from 'vite-plugin-pwa';
 
 const fromHere = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 
@@ -52,8 +53,64 @@ function quotePageRewrite(): Plugin {
   };
 }
 
+/**
+ * The staff app's service worker (Workbox, generated at build time): it keeps the built app on the
+ * device so a crew lead in a backyard with no signal can still open Pondwright and keep the day's log.
+ * Only the app itself is cached; API answers are never cached by the worker (the daily log keeps its
+ * own copies, per user, in features/daily-log). The homeowner's quote page and the API always go to
+ * the network, so a dead link still gets its real 404 or 410.
+ */
+const offlineAppShell = () =>
+  VitePWA({
+    strategies: 'generateSW',
+    registerType: 'prompt',
+    // main.tsx registers it (app/register-service-worker.tsx), so tests never load it.
+    injectRegister: false,
+    manifest: {
+      name: 'Pondwright',
+      short_name: 'Pondwright',
+      description: 'Estimating and job costing for pond and water-feature builders.',
+      start_url: '/',
+      scope: '/',
+      display: 'standalone',
+      background_color: '#f6f5f1',
+      theme_color: '#4a5927',
+      icons: [{ src: '/favicon.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' }],
+    },
+    workbox: {
+      // Inter's Latin faces only: the app's words are English, and the other scripts' faces (Cyrillic,
+      // Greek, Vietnamese) would double what a phone keeps. A page that needs one still loads it online.
+      globPatterns: ['**/*.{js,css,html,svg}', 'assets/inter-latin-*.woff2'],
+      // The quote page is the homeowner's, opened once from an e-mail: no reason to keep it on a crew phone.
+      globIgnores: ['quote.html'],
+      navigateFallback: '/index.html',
+      navigateFallbackDenylist: [/^\/api\//, /^\/q\//],
+      cleanupOutdatedCaches: true,
+      // The staff app's largest chunk is well under this; the default 2 MiB would silently skip a bigger one.
+      maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+    },
+  });
+
+/**
+ * The PWA plugin links the manifest from every page; the homeowner's quote page is not the staff app
+ * and must not offer to install it.
+ */
+function quotePageWithoutManifest(): Plugin {
+  return {
+    name: 'pondwright:quote-page-without-manifest',
+    enforce: 'post',
+    transformIndexHtml: {
+      order: 'post',
+      handler: (html, context) =>
+        context.path.endsWith('/quote.html')
+          ? html.replace(/<link rel="manifest"[^>]*>/g, '')
+          : html,
+    },
+  };
+}
+
 export default defineConfig({
-  plugins: [react(), quotePageRewrite()],
+  plugins: [react(), quotePageRewrite(), offlineAppShell(), quotePageWithoutManifest()],
   resolve: { alias: aliases },
   server: {
     port: 5173,

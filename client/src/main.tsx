@@ -1,6 +1,7 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app';
+import { registerServiceWorker } from './app/register-service-worker';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('The page has no #root element');
@@ -10,3 +11,4 @@ createRoot(root).render(
     <App />
   </StrictMode>,
 );
+registerServiceWorker();

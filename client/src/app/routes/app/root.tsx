@@ -1,9 +1,11 @@
 import { Group } from '@mantine/core';
 import { Outlet } from 'react-router-dom';
 import { AppLayout } from '@/components/layouts/app-layout';
+import { OfflineStartBanner } from '@/features/auth/components/offline-start-banner';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { UserMenu } from '@/features/auth/components/user-menu';
 import { useSignedInUser } from '@/features/auth/hooks/use-signed-in-user';
+import { useOpenedOffline } from '@/features/auth/session/offline-session';
 import { DailyLogSync } from '@/features/daily-log/components/daily-log-sync';
 import { WaitingLogsButton } from '@/features/daily-log/components/waiting-logs-button';
 import { useMailboxAvailable } from '@/features/dev-mailbox/api/get-mailbox';
@@ -12,6 +14,7 @@ import { navItemsFor } from '../../navigation';
 
 function SignedInShell() {
   const user = useSignedInUser();
+  const openedOffline = useOpenedOffline();
   // Owners see the developer mailbox only where the server has one (it answers 404 in production).
   const mailbox = useMailboxAvailable(canAccess(user.role, 'devMailbox'));
   return (
@@ -25,6 +28,7 @@ function SignedInShell() {
         </Group>
       }
     >
+      {openedOffline && <OfflineStartBanner />}
       <DailyLogSync userId={user.id} />
       <Outlet />
     </AppLayout>
