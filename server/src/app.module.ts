@@ -37,6 +37,8 @@ import {
 import { TakeoffModule } from './takeoff/takeoff.module';
 import { UsersModule } from './users/users.module';
 
+const REQUEST_ID = /^[A-Za-z0-9._-]{1,64}$/;
+
 @Module({
   imports: [
     AppConfigModule,
@@ -46,13 +48,15 @@ import { UsersModule } from './users/users.module';
         pinoHttp: {
           level: config.logLevel,
           genReqId: (request, response) => {
-            const id = (request.headers['x-request-id'] as string | undefined) ?? randomUUID();
+            // A caller's (or proxy's) id is kept only when it is a plain token, so it cannot forge log lines.
+            const given = request.headers['x-request-id'];
+            const id = typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
             response.setHeader('x-request-id', id);
             return id;
           },
           // Tokens, cookies and passwords never reach the log.
           redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
-          autoLogging: { ignore: (request) => request.url === '/api/health' },
+          autoLogging: { ignore: (request) => request.url?.startsWith('/api/health') ?? false },
           serializers: { req: redactRequestForLog },
         },
       }),

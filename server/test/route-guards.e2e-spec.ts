@@ -21,6 +21,7 @@ const PUBLIC_ROUTES = [
   'AuthController.previewInvite',
   'AuthController.acceptInvite',
   'HealthController.check',
+  'HealthController.live',
   // The homeowner's quote: the link's token is the credential.
   'PublicQuotesController.view',
   'PublicQuotesController.accept',

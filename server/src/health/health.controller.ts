@@ -11,9 +11,23 @@ const DATABASE_CHECK_TIMEOUT_MS = 2000;
 export class HealthController {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  /** Ready to serve: the database answers a query within two seconds. */
+  /**
+   * Alive: the process answers, whatever the state of the database. An orchestrator restarts a server
+   * that fails this, so it must not fail when only PostgreSQL is away (the server reconnects by itself).
+   */
   @Public()
-  @Get()
+  @Get('live')
+  @ApiOkResponse({ schema: { example: { status: 'ok' } } })
+  live(): { status: 'ok' } {
+    return { status: 'ok' };
+  }
+
+  /**
+   * Ready to serve: the database answers a query within two seconds. A load balancer sends no traffic to
+   * a server that fails this. `/api/health` is the same check, kept for the start and test scripts.
+   */
+  @Public()
+  @Get(['', 'ready'])
   @ApiOkResponse({ schema: { example: { status: 'ok' } } })
   @ApiServiceUnavailableResponse({ description: 'The database is not answering' })
   async check(): Promise<{ status: 'ok' }> {

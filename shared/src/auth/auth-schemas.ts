@@ -97,4 +97,6 @@ export type ApiErrorBody = {
   error: string;
   message: string;
   details?: Array<{ field: string; message: string }>;
+  /** The request's id, also in the `x-request-id` header and the server's log: what support asks for. */
+  requestId?: string;
 };

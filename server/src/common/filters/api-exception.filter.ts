@@ -10,10 +10,14 @@ import type { ApiErrorBody } from '@pondwright/shared';
 import type { NextFunction, Request, Response } from 'express';
 import { STATUS_CODES } from 'node:http';
 import { AppError } from '../errors/app-error';
+import { isServiceUnavailable } from './service-unavailable';
 
 type FieldDetail = { field: string; message: string };
 
-/** Turns every error into `{statusCode, error, message, details?}`; nothing else ever reaches a client. */
+/**
+ * Turns every error into `{statusCode, error, message, details?, code?, requestId}`; nothing else ever
+ * reaches a client. The request id ties a complaint to its line in the log.
+ */
 @Catch()
 export class ApiExceptionFilter implements ExceptionFilter {
   private readonly logger = new Logger('ApiExceptionFilter');
@@ -38,6 +42,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
 
   private reply(exception: unknown, response: Response): void {
     const body = this.toBody(exception);
+    const requestId = response.getHeader('x-request-id');
+    if (typeof requestId === 'string') body.requestId = requestId;
     if (body.statusCode >= 500) {
       this.logger.error(
         exception instanceof Error ? (exception.stack ?? exception.message) : String(exception),
@@ -71,6 +77,13 @@ export class ApiExceptionFilter implements ExceptionFilter {
     // A unique index refused a duplicate that slipped past the service's own check (two requests at once).
     if ((exception as { driverError?: { code?: string } })?.driverError?.code === '23505') {
       return this.body(HttpStatus.CONFLICT, 'This already exists.');
+    }
+    // PostgreSQL (or the file store) is down, restarting or not answering: an outage to retry, not a bug.
+    if (isServiceUnavailable(exception)) {
+      return this.body(
+        HttpStatus.SERVICE_UNAVAILABLE,
+        'Pondwright cannot reach a service it depends on just now. Please try again in a minute.',
+      );
     }
     // body-parser's errors carry an HTTP status and a type; a syntax error in the JSON is the client's.
     const parserError = exception as { status?: number; type?: string };
