@@ -98,6 +98,34 @@ describe('customers', () => {
       .expect(404);
   });
 
+  it('keeps a customer who has an estimate: 409 with a code, and nothing removed', async () => {
+    const customer = await testApp
+      .http()
+      .post('/api/customers')
+      .set(...bearer(owner))
+      .send({ name: 'Ottoline Brackwater' })
+      .expect(201);
+    await testApp
+      .http()
+      .post('/api/estimates')
+      .set(...bearer(owner))
+      .send({ title: 'Wildlife pond', customerId: customer.body.id })
+      .expect(201);
+
+    const refused = await testApp
+      .http()
+      .delete(`/api/customers/${customer.body.id}`)
+      .set(...bearer(owner))
+      .expect(409);
+    expect(refused.body).toMatchObject({ code: 'CUSTOMER_HAS_ESTIMATES' });
+    expect(refused.body.message).toMatch(/has an estimate/);
+    await testApp
+      .http()
+      .get(`/api/customers/${customer.body.id}`)
+      .set(...bearer(owner))
+      .expect(200);
+  });
+
   it('refuse bad fields with one clear message per field and save nothing', async () => {
     const name = `Nobody ${Date.now()}`;
     const response = await createCustomer(owner, {

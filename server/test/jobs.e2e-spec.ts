@@ -1,6 +1,7 @@
 import type {
   DailyLogView,
   EstimateView,
+  JobCostReport,
   JobListItem,
   JobView,
   LogEntry,
@@ -257,6 +258,76 @@ describe('daily logs', () => {
       entries: [hours('Ana', 'excavation', '30')],
     }).expect(400);
     expect(invalid.body.details[0].field).toBe('entries.0.hours');
+  });
+
+  it('keep disposal counted in loads with its load size, and the report compares it in yd³', async () => {
+    const owner = await signupCompany(testApp);
+    const crewLead = await addMember(testApp, owner, 'crew_lead');
+    const { job } = await makeJob(owner);
+    const haul = job.budget!.lines.find((line) => line.category === 'disposal')!;
+    expect(haul.unit).toBe('cu yd');
+    const loads = (quantity: string, loadVolumeLooseCubicYards?: string): LogEntry => ({
+      id: randomUUID(),
+      kind: 'disposal',
+      movement: null,
+      code: haul.code,
+      description: 'Tri-axle loads to the tip',
+      quantity,
+      unit: 'load',
+      unitCost: null,
+      supplier: null,
+      ticketNumber: null,
+      ...(loadVolumeLooseCubicYards === undefined ? {} : { loadVolumeLooseCubicYards }),
+    });
+    const logId = randomUUID();
+    const body = { logDate: '2027-03-15', notes: '', entries: [loads('3', '10')], baseRevision: 0 };
+    await putLog(crewLead, job.id, logId, body).expect(201);
+    // The same content again is a resend: the load size is part of what is compared.
+    expect((await putLog(crewLead, job.id, logId, body).expect(200)).body.revision).toBe(1);
+    // A log written before loads had a size, as old phones still send them, is kept as it was.
+    await putLog(crewLead, job.id, randomUUID(), {
+      logDate: '2027-03-16',
+      notes: '',
+      entries: [loads('2')],
+      baseRevision: 0,
+    }).expect(201);
+
+    const logs = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}/logs`)
+        .set(...bearer(crewLead))
+        .expect(200)
+    ).body as DailyLogView[];
+    expect(logs[0]!.entries).toEqual(body.entries);
+    expect(logs[0]!.entries[0]).toMatchObject({ unit: 'load', loadVolumeLooseCubicYards: '10' });
+    expect(logs[1]!.entries[0]).not.toHaveProperty('loadVolumeLooseCubicYards');
+
+    const tooBig = await putLog(crewLead, job.id, randomUUID(), {
+      ...body,
+      logDate: '2027-03-17',
+      entries: [loads('1', '45')],
+    }).expect(400);
+    expect(tooBig.body.details).toContainEqual({
+      field: 'entries.0.loadVolumeLooseCubicYards',
+      message: 'At most 40 yd³ a load (the largest roll-off container)',
+    });
+
+    const report = (
+      await testApp
+        .http()
+        .get(`/api/jobs/${job.id}/report`)
+        .set(...bearer(owner))
+        .expect(200)
+    ).body as JobCostReport;
+    const row = report.disposal.find((r) => r.code === haul.code && r.unit === 'cu yd')!;
+    // 3 loads × 10 yd³ = 30 yd³, plus the 2 loads without a size counted as 2 yd³ (and warned about)
+    expect(row).toMatchObject({ actualQuantity: '32', loggedLoads: '3' });
+    expect(cents(row.actualCost)).toBe(
+      Math.round(30 * Number(haul.unitCost) * 100) + Math.round(2 * Number(haul.unitCost) * 100),
+    );
+    expect(report.warnings.some((w) => w.includes('without a load size'))).toBe(true);
+    expect(report.notes.some((n) => n.includes('nominal capacity'))).toBe(true);
   });
 
   it('stop when the job is closed; only the owner closes it', async () => {
@@ -618,7 +689,7 @@ describe('change orders', () => {
         .get(`/api/jobs/${job.id}/change-orders`)
         .set(...bearer(owner))
         .expect(200)
-    ).body as Array<{ status: string; cost: string | null }>;
+    ).body as Array<{ status: string; cost: string }>;
     expect(listed.map((o) => o.status)).toEqual(['accepted', 'declined']);
     expect(listed[0]!.cost).toBe('540.00');
     // The crew builds the accepted change from its budget, without prices.

@@ -133,6 +133,62 @@ describe('The quote page for a change order', () => {
     expect(screen.queryByRole('button', { name: 'Accept change' })).toBeNull();
   });
 
+  it('shows a credit: the work taken off at its price, the credit and the smaller total', async () => {
+    const view = changeOrderQuoteView();
+    // The second waterfall's boulders come off (−1,200.00, taxed at 3.4375 % = −41.25) and the
+    // stream's labor goes from 30 to 20 ft (−400.00, untaxed): −1,641.25 in all, so the job goes
+    // from 13,292.25 to 11,651.00.
+    const credit = {
+      ...view,
+      changeOrder: {
+        ...view.changeOrder!,
+        title: 'No second waterfall',
+        lines: [
+          {
+            change: 'removed' as const,
+            description: 'Boulders for the second waterfall',
+            quantity: '4',
+            unit: 't',
+            fromQuantity: '4',
+            toQuantity: '0',
+            price: '-1200.00',
+          },
+          {
+            change: 'reduced' as const,
+            description: 'Stream building',
+            quantity: '10',
+            unit: 'ft',
+            fromQuantity: '30',
+            toQuantity: '20',
+            price: '-400.00',
+          },
+        ],
+        priceBeforeTax: '-1600.00',
+        tax: '-41.25',
+        total: '-1641.25',
+        newJobTotal: '11651.00',
+      },
+    };
+    mockApi({ [GET]: json(credit) });
+    renderQuotePage();
+
+    const change = await screen.findByRole('region', { name: 'Change to your project' });
+    const lines = within(change).getByRole('table', {
+      name: 'What the change adds and takes off',
+    });
+    const rows = within(lines).getAllByRole('row');
+    expect(rows[1]).toHaveTextContent('Boulders for the second waterfallTaken off-$1,200.00');
+    expect(rows[2]).toHaveTextContent('Stream building30 → 20 ft-$400.00');
+    expect(within(change).getByText('Credit to you, tax included')).toBeInTheDocument();
+    expect(screen.getByTestId('change-total')).toHaveTextContent('-$1,641.25');
+    expect(screen.getByTestId('change-job-total')).toHaveTextContent(
+      '$13,292.25 → becomes $11,651.00',
+    );
+    expect(screen.getByRole('form', { name: 'Accept this change' })).toHaveTextContent(
+      'This change is a credit of $1,641.25, tax included, and brings your project to $11,651.00. It comes off the balance due when the work is finished.',
+    );
+  });
+
   it('shows an answered change read-only when the link is opened again', async () => {
     mockApi({ [GET]: json(changeOrderQuoteView('accepted')) });
     renderQuotePage();

@@ -5,7 +5,12 @@ import { useQuote } from './api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from './api/quote-request';
 import { AcceptForm } from './components/accept-form';
 import { AcceptedPanel, DeclinedPanel } from './components/answer-panels';
-import { ChangeAnsweredPanel, ChangeOrderSection } from './components/change-order';
+import {
+  ChangeAnsweredPanel,
+  ChangeOrderSection,
+  creditAmount,
+  isCredit,
+} from './components/change-order';
 import { DeclineForm } from './components/decline-form';
 import { InvoiceSection } from './components/invoice-section';
 import { PaymentPanel } from './components/payment-panel';
@@ -305,11 +310,20 @@ function QuoteDocument({
                   subject="change"
                   optionIds={[]}
                   summary={
-                    <>
-                      This change adds <strong>{money(change.total)}</strong>, tax included, and
-                      brings your project to <strong>{money(change.newJobTotal)}</strong>. There’s
-                      nothing to pay now: it’s added to the balance due when the work is finished.
-                    </>
+                    isCredit(change) ? (
+                      <>
+                        This change is a credit of <strong>{money(creditAmount(change))}</strong>,
+                        tax included, and brings your project to{' '}
+                        <strong>{money(change.newJobTotal)}</strong>. It comes off the balance due
+                        when the work is finished.
+                      </>
+                    ) : (
+                      <>
+                        This change adds <strong>{money(change.total)}</strong>, tax included, and
+                        brings your project to <strong>{money(change.newJobTotal)}</strong>. There’s
+                        nothing to pay now: it’s added to the balance due when the work is finished.
+                      </>
+                    )
                   }
                   onAccepted={() => setAnsweredHere(true)}
                 />

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
-import type { AcceptQuoteRequest, BudgetLine } from '@pondwright/shared';
-import { formatMoney, PricingDecimal, toDecimal } from '@pondwright/shared/pricing';
+import { budgetAfterChangeOrder, type AcceptQuoteRequest } from '@pondwright/shared';
+import { formatMoney, toDecimal } from '@pondwright/shared/pricing';
 import type { EntityManager } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { AppConfig } from '../config/app-config';
@@ -13,6 +13,7 @@ import { HOMEOWNER, recordEstimateEvent } from '../quotes/estimate-events';
 import { money, quoteAnsweredStaffMail } from '../quotes/quote-mail';
 import { User } from '../users/entities/user.entity';
 import { ChangeOrder } from './entities/change-order.entity';
+import { amountPaid, isInvoiced, supersedingChange } from './job-contract';
 
 type Answer =
   | {
@@ -24,7 +25,9 @@ type Answer =
 
 /**
  * The homeowner's answer to a change order, in the caller's transaction. Accepting checks the version
- * shown, records who, when and from where, and only then adds the change to the job's budget.
+ * shown and that the change still stands (no other change accepted since it was priced, no final
+ * invoice yet, a credit not below what they have paid), records who, when and from where, and only
+ * then applies the change to the job's budget: new lines added, work taken off, totals moved.
  */
 @Injectable()
 export class ChangeOrderAnswers {
@@ -57,6 +60,16 @@ export class ChangeOrderAnswers {
           'This change has been updated since you opened it. Reload the page to see it.',
         );
       }
+      await refuseIfNoLongerStanding(manager, job, order);
+      const budget = budgetAfterChangeOrder(job.budget, {
+        versionNumber: version.versionNumber,
+        contentSha256: version.contentSha256,
+        added: order.budgetLines,
+        reductions: order.budgetReductions,
+        priceBeforeTax: order.summary.priceBeforeTax,
+        tax: order.summary.tax,
+        total: order.summary.total,
+      });
       await manager.update(
         ChangeOrder,
         { id: order.id },
@@ -68,7 +81,7 @@ export class ChangeOrderAnswers {
           acceptedAt: now,
         },
       );
-      await manager.update(Job, { id: job.id }, { budget: grownBudget(job, order, version) });
+      await manager.update(Job, { id: job.id }, { budget });
     } else {
       await manager.update(ChangeOrder, { id: order.id }, { status: 'declined', declinedAt: now });
     }
@@ -101,7 +114,7 @@ export class ChangeOrderAnswers {
         title: `change order ${order.number}: ${order.title}`,
         customerName: answer.accepted ? answer.request.fullName : 'The homeowner',
         detail: answer.accepted
-          ? `It adds ${money(order.summary.total, job.budget.currency)}; the job's budget now totals ${money(order.summary.newJobTotal, job.budget.currency)}.`
+          ? `${changeWords(order.summary.total, job.budget.currency)}; the job's budget now totals ${money(order.summary.newJobTotal, job.budget.currency)}.`
           : answer.reason
             ? `Their reason: ${answer.reason}`
             : 'They gave no reason.',
@@ -111,25 +124,44 @@ export class ChangeOrderAnswers {
   }
 }
 
-/** The job's budget with an accepted change order's lines and price added. */
-function grownBudget(job: Job, order: ChangeOrder, version: EstimateVersion): Job['budget'] {
-  const budget = job.budget;
-  const sum = (lines: BudgetLine[], pick: (line: BudgetLine) => string) =>
-    lines.reduce((total, line) => total.plus(toDecimal(pick(line))), new PricingDecimal(0));
-  const labor = order.budgetLines.filter((line) => line.category === 'labor');
-  return {
-    ...budget,
-    versionNumber: version.versionNumber,
-    contentSha256: version.contentSha256,
-    lines: [...budget.lines, ...order.budgetLines],
-    cost: formatMoney(toDecimal(budget.cost).plus(sum(order.budgetLines, (l) => l.extendedCost))),
-    priceBeforeTax: formatMoney(
-      toDecimal(budget.priceBeforeTax).plus(toDecimal(order.summary.priceBeforeTax)),
-    ),
-    tax: formatMoney(toDecimal(budget.tax).plus(toDecimal(order.summary.tax))),
-    total: formatMoney(toDecimal(budget.total).plus(toDecimal(order.summary.total))),
-    laborHours: toDecimal(budget.laborHours)
-      .plus(sum(labor, (l) => l.quantity))
-      .toFixed(2),
-  };
+/** "It adds $540.00" for new work, "It credits $1,200.00" for a change that takes work off. */
+function changeWords(total: string, currency: string): string {
+  const amount = toDecimal(total);
+  return amount.isNegative()
+    ? `It credits ${money(formatMoney(amount.negated()), currency)}`
+    : `It adds ${money(total, currency)}`;
+}
+
+/**
+ * Refuses (409, nothing written) a change that no longer stands: the job's final invoice is issued,
+ * another change was accepted since this one was priced, or a credit would take the job's total
+ * below what the homeowner has paid since it was priced.
+ */
+async function refuseIfNoLongerStanding(
+  manager: EntityManager,
+  job: Job,
+  order: ChangeOrder,
+): Promise<void> {
+  if (await isInvoiced(manager, job)) {
+    throw new AppError(
+      'JOB_INVOICED',
+      'Your final invoice for this project is already issued, so this change can no longer be accepted. Contact the company to talk it over.',
+    );
+  }
+  if (await supersedingChange(manager, job, order)) {
+    throw new AppError(
+      'CHANGE_ORDER_SUPERSEDED',
+      'This change was priced before another change you accepted, so its figures no longer hold. Ask the company to send it again.',
+    );
+  }
+  const newTotal = toDecimal(job.budget.total).plus(toDecimal(order.summary.total));
+  if (toDecimal(order.summary.total).isNegative()) {
+    const paid = await amountPaid(manager, job);
+    if (newTotal.lessThan(paid)) {
+      throw new AppError(
+        'CREDIT_EXCEEDS_PAID',
+        `This credit would bring your project total below the ${money(formatMoney(paid), job.budget.currency)} you have already paid. Contact the company to settle it.`,
+      );
+    }
+  }
 }

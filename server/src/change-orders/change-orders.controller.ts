@@ -13,11 +13,11 @@ export class ChangeOrdersController {
   /** Staff only: a change order is prices; the crew sees accepted changes in the job's crew budget. */
   @Roles('owner', 'estimator')
   @Get()
-  list(@Param('id') id: string, @CurrentUser() user: Principal): Promise<ChangeOrderView[]> {
-    return this.orders.list(id, user.role);
+  list(@Param('id') id: string): Promise<ChangeOrderView[]> {
+    return this.orders.list(id);
   }
 
-  /** Body: `createChangeOrderRequestSchema`. */
+  /** Body: `createChangeOrderRequestSchema`: lines to add, work to take off (a credit), or both. */
   @Roles('owner', 'estimator')
   @Post()
   create(
@@ -25,7 +25,7 @@ export class ChangeOrdersController {
     @Body() body: unknown,
     @CurrentUser() user: Principal,
   ): Promise<ChangeOrderView> {
-    return this.orders.create(id, body, user.userId, user.role);
+    return this.orders.create(id, body, user.userId);
   }
 
   /** Body: `{recipientEmail?}`; the homeowner who accepted the quote by default. */
@@ -38,6 +38,6 @@ export class ChangeOrdersController {
     @Body() body: unknown,
     @CurrentUser() user: Principal,
   ): Promise<ChangeOrderView> {
-    return this.orders.send(id, orderId, body, user.userId, user.role);
+    return this.orders.send(id, orderId, body, user.userId);
   }
 }

@@ -1,13 +1,20 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import {
+  changeOrderDifference,
   createChangeOrderRequestSchema,
   sendInvoiceRequestSchema,
   type BudgetLine,
   type ChangeOrderView,
-  type Role,
+  type CreateChangeOrderRequest,
 } from '@pondwright/shared';
-import { formatMoney, toDecimal } from '@pondwright/shared/pricing';
+import {
+  formatMoney,
+  sumDecimals,
+  toDecimal,
+  type LineReduction,
+  type PricedLine,
+} from '@pondwright/shared/pricing';
 import { DataSource, IsNull, type EntityManager } from 'typeorm';
 import { hashToken, newSecureToken } from '../auth/secure-token';
 import { AppError } from '../common/errors/app-error';
@@ -19,6 +26,7 @@ import { Company } from '../companies/entities/company.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { versionSha256 } from '../estimates/content-hash';
+import { fieldErrors } from '../estimates/field-errors';
 import { priceEstimateContent, type UncheckedContent } from '../estimates/price-estimate';
 import { Job } from '../jobs/entities/job.entity';
 import { findCompanyJob } from '../jobs/find-job';
@@ -27,16 +35,20 @@ import { PriceBookVersion } from '../price-book/entities/price-book-version.enti
 import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
 import { QuoteLink } from '../quotes/entities/quote-link.entity';
 import { recordEstimateEvent } from '../quotes/estimate-events';
+import { money } from '../quotes/quote-mail';
 import { User } from '../users/entities/user.entity';
 import { changeOrderMail } from './change-order-mail';
 import { ChangeOrder } from './entities/change-order.entity';
+import { amountPaid, isInvoiced, supersedingChange, versionInForce } from './job-contract';
 
 const LINK_DAYS = 30;
 
 /**
  * Change orders on a job. Each is priced with the accepted version's price book on top of the version
  * in force (the accepted quote and the change orders accepted since), frozen as the estimate's next
- * version, and sent to the homeowner; the job's budget grows only when the homeowner accepts.
+ * version, and sent to the homeowner; the job's budget changes only when the homeowner accepts. A
+ * change adds work (manual lines), takes work off lines of the job (a credit, priced at the rates the
+ * lines were sold at), or both.
  */
 @Injectable()
 export class ChangeOrdersService {
@@ -47,27 +59,36 @@ export class ChangeOrdersService {
     private readonly config: AppConfig,
   ) {}
 
-  async list(jobId: string, role: Role): Promise<ChangeOrderView[]> {
+  async list(jobId: string): Promise<ChangeOrderView[]> {
     const manager = this.dataSource.manager;
     const job = await this.findJob(manager, jobId);
     const orders = await manager.find(ChangeOrder, {
       where: { jobId: job.id, companyId: job.companyId },
       order: { number: 'ASC' },
     });
-    return Promise.all(orders.map((order) => this.view(manager, order, role)));
+    return Promise.all(orders.map((order) => this.view(manager, order)));
   }
 
-  async create(
-    jobId: string,
-    body: unknown,
-    actorId: string,
-    role: Role,
-  ): Promise<ChangeOrderView> {
+  /**
+   * Prices the change on the version in force and freezes it as the estimate's next version. Work
+   * taken off must be on a line of the job and leave less of it; a credit may not take the job's
+   * total below what the homeowner has paid (409 `CREDIT_EXCEEDS_PAID`), and an invoiced job takes
+   * no more changes (409 `JOB_INVOICED`). Nothing is saved when any of it is refused.
+   */
+  async create(jobId: string, body: unknown, actorId: string): Promise<ChangeOrderView> {
     const request = parseBody(createChangeOrderRequestSchema, body);
     const id = await this.dataSource.transaction(async (manager) => {
       const job = await this.findJob(manager, jobId, true);
       if (job.status === 'closed') throw new AppError('JOB_CLOSED', 'This job is closed.');
+      if (await isInvoiced(manager, job)) {
+        throw new AppError(
+          'JOB_INVOICED',
+          'The final invoice for this job is issued, so its total can no longer change.',
+        );
+      }
       const base = await versionInForce(manager, job);
+      const acceptance = await manager.findOneByOrFail(QuoteAcceptance, { id: job.acceptanceId });
+      checkReductions(request, jobLines(base, acceptance.optionIds));
       const [{ next }] = (await manager.query(
         'SELECT coalesce(max(number), 0) + 1 AS next FROM change_orders WHERE job_id = $1',
         [job.id],
@@ -75,6 +96,7 @@ export class ChangeOrdersService {
       const number = Number(next);
       const prefix = `co${number}-`;
       const book = await manager.findOneByOrFail(PriceBookVersion, { id: base.priceBookVersionId });
+      const lineReductions = mergeReductions(base.content.lineReductions ?? [], request);
       const { content, computed } = priceEstimateContent(
         {
           ...base.content,
@@ -82,16 +104,29 @@ export class ChangeOrdersService {
             ...base.content.manualLines,
             ...request.lines.map((line, index) => ({ ...line, id: `${prefix}${index + 1}` })),
           ],
+          ...(lineReductions.length > 0 ? { lineReductions } : {}),
         } as UncheckedContent,
         book.content,
       );
-      const changeLines = computed.priced.lines.filter((line) =>
-        line.id.startsWith(`manual:${prefix}`),
-      );
-      const before = base.computed.priced.totals;
-      const after = computed.priced.totals;
-      const total = toDecimal(after.total).minus(toDecimal(before.total));
-      const tax = toDecimal(after.tax).minus(toDecimal(before.tax));
+      const difference = changeOrderDifference({
+        before: base.computed.priced,
+        after: computed.priced,
+        chosenOptionIds: acceptance.optionIds,
+        addedLineIds: request.lines.map((_, index) => `manual:${prefix}${index + 1}`),
+        reducedLineIds: request.reductions.map((reduction) => reduction.lineId),
+      });
+      const total = toDecimal(difference.total);
+      const newJobTotal = toDecimal(job.budget.total).plus(total);
+      if (total.isNegative()) {
+        const paid = await amountPaid(manager, job);
+        if (newJobTotal.lessThan(paid)) {
+          const currency = job.budget.currency;
+          throw new AppError(
+            'CREDIT_EXCEEDS_PAID',
+            `This credit would bring the job's total to ${money(formatMoney(newJobTotal), currency)}, below the ${money(formatMoney(paid), currency)} the homeowner has already paid. Take off at most ${money(formatMoney(toDecimal(job.budget.total).minus(paid)), currency)}, tax included.`,
+          );
+        }
+      }
       const [{ versionNumber }] = (await manager.query(
         'SELECT max(version_number) + 1 AS "versionNumber" FROM estimate_versions WHERE estimate_id = $1',
         [job.estimateId],
@@ -116,36 +151,20 @@ export class ChangeOrdersService {
           title: request.title,
           reason: request.reason,
           versionId: version.id,
+          baseVersionId: base.id,
           summary: {
             number,
             title: request.title,
             reason: request.reason,
-            lines: changeLines.map((line) => ({
-              description: line.description,
-              quantity: line.quantity,
-              unit: line.unit,
-              price: line.price,
-            })),
-            priceBeforeTax: formatMoney(total.minus(tax)),
-            tax: formatMoney(tax),
-            total: formatMoney(total),
+            lines: difference.lines,
+            priceBeforeTax: difference.priceBeforeTax,
+            tax: difference.tax,
+            total: difference.total,
             previousJobTotal: job.budget.total,
-            newJobTotal: formatMoney(toDecimal(job.budget.total).plus(total)),
+            newJobTotal: formatMoney(newJobTotal),
           },
-          budgetLines: changeLines.map((line): BudgetLine => ({
-            id: line.id,
-            category: line.category,
-            description: line.description,
-            code: line.code,
-            source: line.source,
-            // Hand-written lines name no labor task; the cost report lists them apart.
-            task: null,
-            quantity: line.quantity,
-            unit: line.unit,
-            unitCost: line.unitCost,
-            extendedCost: line.extendedCost,
-            price: line.price,
-          })),
+          budgetLines: difference.added.map(budgetLine),
+          budgetReductions: difference.reductions,
           status: 'ready',
           createdById: actorId,
         }),
@@ -155,12 +174,12 @@ export class ChangeOrdersService {
         estimateId: job.estimateId,
         actorId,
         action: 'change-order-created',
-        detail: { number, versionNumber: version.versionNumber, total: formatMoney(total) },
+        detail: { number, versionNumber: version.versionNumber, total: difference.total },
       });
       return order.id;
     });
     const manager = this.dataSource.manager;
-    return this.view(manager, await manager.findOneByOrFail(ChangeOrder, { id }), role);
+    return this.view(manager, await manager.findOneByOrFail(ChangeOrder, { id }));
   }
 
   /** Sends (or sends again) the change order to the homeowner as a link. */
@@ -169,7 +188,6 @@ export class ChangeOrdersService {
     orderId: string,
     body: unknown,
     actorId: string,
-    role: Role,
   ): Promise<ChangeOrderView> {
     const request = parseBody(sendInvoiceRequestSchema, body);
     await this.dataSource.transaction(async (manager) => {
@@ -182,6 +200,19 @@ export class ChangeOrdersService {
         throw new AppError(
           'QUOTE_ALREADY_ANSWERED',
           `This change order was already ${order.status}.`,
+        );
+      }
+      if (await isInvoiced(manager, job)) {
+        throw new AppError(
+          'JOB_INVOICED',
+          'The final invoice for this job is issued, so its total can no longer change.',
+        );
+      }
+      const superseding = await supersedingChange(manager, job, order);
+      if (superseding) {
+        throw new AppError(
+          'CHANGE_ORDER_SUPERSEDED',
+          `Change order ${superseding.number} was accepted after this one was priced, so its figures no longer hold. Make a new change order for it.`,
         );
       }
       const acceptance = await manager.findOneByOrFail(QuoteAcceptance, { id: job.acceptanceId });
@@ -234,14 +265,10 @@ export class ChangeOrdersService {
       });
     });
     const manager = this.dataSource.manager;
-    return this.view(manager, await manager.findOneByOrFail(ChangeOrder, { id: orderId }), role);
+    return this.view(manager, await manager.findOneByOrFail(ChangeOrder, { id: orderId }));
   }
 
-  private async view(
-    manager: EntityManager,
-    order: ChangeOrder,
-    role: Role,
-  ): Promise<ChangeOrderView> {
+  private async view(manager: EntityManager, order: ChangeOrder): Promise<ChangeOrderView> {
     const [version, link] = await Promise.all([
       manager.findOneByOrFail(EstimateVersion, { id: order.versionId }),
       manager.findOne(QuoteLink, {
@@ -249,10 +276,12 @@ export class ChangeOrdersService {
         order: { createdAt: 'DESC' },
       }),
     ]);
-    const cost = order.budgetLines.reduce(
-      (sum, line) => sum.plus(toDecimal(line.extendedCost)),
-      toDecimal('0'),
-    );
+    const cost = sumDecimals([
+      ...order.budgetLines.map((line) => toDecimal(line.extendedCost)),
+      ...order.budgetReductions.map((reduction) =>
+        toDecimal(reduction.extendedCost).minus(toDecimal(reduction.previous.extendedCost)),
+      ),
+    ]);
     return {
       ...order.summary,
       id: order.id,
@@ -260,7 +289,7 @@ export class ChangeOrdersService {
       status: order.status,
       versionNumber: version.versionNumber,
       contentSha256: version.contentSha256,
-      cost: role === 'crew_lead' ? null : formatMoney(cost),
+      cost: formatMoney(cost),
       sentTo: link?.recipientEmail ?? null,
       acceptedByName: order.acceptedName,
       acceptedAt: order.acceptedAt?.toISOString() ?? null,
@@ -275,15 +304,80 @@ export class ChangeOrdersService {
 }
 
 /**
- * The version the job stands on: the last accepted change order's, or the accepted quote's. A change
- * order is priced on top of it, so declined or unanswered changes never leak into the next one.
+ * The job's priced lines in a version: its base lines and those of the options the homeowner chose
+ * (the lines of the job's budget, by the same ids).
  */
-export async function versionInForce(manager: EntityManager, job: Job): Promise<EstimateVersion> {
-  const latest = await manager.findOne(ChangeOrder, {
-    where: { jobId: job.id, status: 'accepted' },
-    order: { number: 'DESC' },
+function jobLines(
+  version: EstimateVersion,
+  chosenOptionIds: ReadonlyArray<string>,
+): Map<string, PricedLine> {
+  const priced = version.computed.priced;
+  return new Map(
+    [
+      ...priced.lines,
+      ...priced.options
+        .filter((option) => chosenOptionIds.includes(option.id))
+        .flatMap((option) => option.lines),
+    ].map((line) => [line.id, line]),
+  );
+}
+
+/** Each line work is taken off must be one of the job's, and keep less than it has (400 otherwise). */
+function checkReductions(request: CreateChangeOrderRequest, lines: Map<string, PricedLine>): void {
+  const details = request.reductions.flatMap((reduction, index) => {
+    const line = lines.get(reduction.lineId);
+    if (!line) {
+      return [
+        {
+          field: `reductions.${index}.lineId`,
+          message: 'Choose a line of the job’s budget: this one is not in the work agreed',
+        },
+      ];
+    }
+    if (!toDecimal(reduction.newQuantity).lessThan(toDecimal(line.quantity))) {
+      return [
+        {
+          field: `reductions.${index}.newQuantity`,
+          message: `Enter less than ${line.quantity} ${line.unit}: a credit takes work off (add new work as a line)`,
+        },
+      ];
+    }
+    return [];
   });
-  if (latest) return manager.findOneByOrFail(EstimateVersion, { id: latest.versionId });
-  const acceptance = await manager.findOneByOrFail(QuoteAcceptance, { id: job.acceptanceId });
-  return manager.findOneByOrFail(EstimateVersion, { id: acceptance.versionId });
+  if (details.length > 0) throw fieldErrors(details);
+}
+
+/**
+ * The version's reductions with the change's: a line reduced again keeps the change's quantity, which
+ * is what the job keeps of the line as first priced.
+ */
+function mergeReductions(
+  previous: ReadonlyArray<LineReduction>,
+  request: CreateChangeOrderRequest,
+): LineReduction[] {
+  const merged = new Map(previous.map((reduction) => [reduction.lineId, reduction]));
+  for (const reduction of request.reductions) {
+    merged.set(reduction.lineId, {
+      lineId: reduction.lineId,
+      newQuantity: toDecimal(reduction.newQuantity).toFixed(),
+    });
+  }
+  return [...merged.values()];
+}
+
+function budgetLine(line: PricedLine): BudgetLine {
+  return {
+    id: line.id,
+    category: line.category,
+    description: line.description,
+    code: line.code,
+    source: line.source,
+    // Hand-written lines name no labor task; the cost report lists them apart.
+    task: null,
+    quantity: line.quantity,
+    unit: line.unit,
+    unitCost: line.unitCost,
+    extendedCost: line.extendedCost,
+    price: line.price,
+  };
 }

@@ -11,11 +11,12 @@ import {
   UseInterceptors,
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBearerAuth, ApiConsumes, ApiOkResponse, ApiTags } from '@nestjs/swagger';
-import type { CompanyProfile } from '@pondwright/shared';
+import { ApiBearerAuth, ApiBody, ApiConsumes, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import type { CompanyProfile, CompanyQuoteTerms } from '@pondwright/shared';
 import type { Response } from 'express';
 import { AnyRole, Roles } from '../common/decorators/auth.decorators';
 import { CompaniesService, MAX_LOGO_BYTES } from './companies.service';
+import { quoteTermsBodyDoc } from './dto/quote-terms.dto';
 import { CompanyProfileDto, UpdateCompanyDto } from './dto/update-company.dto';
 
 @ApiTags('company')
@@ -36,6 +37,20 @@ export class CompaniesController {
   @ApiOkResponse({ type: CompanyProfileDto })
   update(@Body() body: UpdateCompanyDto): Promise<CompanyProfile> {
     return this.companies.update(body);
+  }
+
+  @AnyRole()
+  @Get('quote-terms')
+  quoteTerms(): Promise<CompanyQuoteTerms> {
+    return this.companies.quoteTerms();
+  }
+
+  /** Body: `updateQuoteTermsSchema` (validated with the shared zod schema in the service). */
+  @Roles('owner')
+  @Put('quote-terms')
+  @ApiBody({ schema: quoteTermsBodyDoc })
+  setQuoteTerms(@Body() body: unknown): Promise<CompanyQuoteTerms> {
+    return this.companies.setQuoteTerms(body);
   }
 
   /**

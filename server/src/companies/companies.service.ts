@@ -1,10 +1,16 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { CompanyProfile } from '@pondwright/shared';
+import {
+  DEFAULT_QUOTE_TERMS,
+  updateQuoteTermsSchema,
+  type CompanyProfile,
+  type CompanyQuoteTerms,
+} from '@pondwright/shared';
 import { createHash } from 'node:crypto';
 import { Repository } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
+import { parseBody } from '../common/validation/parse-body';
 import type { UpdateCompanyDto } from './dto/update-company.dto';
 import { CompanyLogo } from './entities/company-logo.entity';
 import { Company } from './entities/company.entity';
@@ -72,6 +78,24 @@ export class CompaniesService {
     return { id: company.id, name: company.name, unitSystem: company.unitSystem, hasLogo };
   }
 
+  async quoteTerms(): Promise<CompanyQuoteTerms> {
+    return termsView(await this.companies.findOneByOrFail({ id: this.tenant.companyId }));
+  }
+
+  /**
+   * Saves the terms quotes are sent with from now on; quotes already sent keep theirs (each link holds
+   * a copy). Null, or text identical to the default, means the built-in default, so the company follows
+   * later improvements to it.
+   */
+  async setQuoteTerms(body: unknown): Promise<CompanyQuoteTerms> {
+    const { terms } = parseBody(updateQuoteTermsSchema, body);
+    await this.companies.update(
+      { id: this.tenant.companyId },
+      { quoteTerms: terms === null || terms === DEFAULT_QUOTE_TERMS ? null : terms },
+    );
+    return this.quoteTerms();
+  }
+
   async update(change: UpdateCompanyDto): Promise<CompanyProfile> {
     if (change.name === undefined && change.unitSystem === undefined) {
       throw new BadRequestException('Change the name or the unit system');
@@ -81,6 +105,13 @@ export class CompaniesService {
     if (change.unitSystem !== undefined) company.unitSystem = change.unitSystem;
     return this.profile(await this.companies.save(company));
   }
+}
+
+function termsView(company: Company): CompanyQuoteTerms {
+  return {
+    terms: company.quoteTerms ?? DEFAULT_QUOTE_TERMS,
+    isDefault: company.quoteTerms === null,
+  };
 }
 
 const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);

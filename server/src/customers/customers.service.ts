@@ -24,6 +24,7 @@ import type {
 } from './dto/customer.dto';
 import { Customer } from './entities/customer.entity';
 import { Site } from './entities/site.entity';
+import { Estimate } from '../estimates/entities/estimate.entity';
 
 /** Sort keys map to fixed SQL; the `id` tie-break keeps pages stable when names or times repeat. */
 const ORDER_BY = {
@@ -132,14 +133,26 @@ export class CustomersService {
   }
 
   /**
-   * Removes the customer and its sites. Estimates do not exist yet; once they do, a customer with
-   * estimates must be refused here (409) rather than cascading them away.
+   * Removes the customer and its sites. A customer with estimates is refused (409) rather than
+   * cascading them away: estimates carry quotes, acceptances and jobs, the company's records.
    */
   async remove(id: string): Promise<void> {
     const customer = await this.customers.getById(id, 'Customer');
-    await this.dataSource
-      .getRepository(Customer)
-      .delete({ id: customer.id, companyId: customer.companyId });
+    await this.dataSource.transaction(async (manager) => {
+      const estimates = await manager.countBy(Estimate, {
+        customerId: customer.id,
+        companyId: customer.companyId,
+      });
+      if (estimates > 0) {
+        throw new AppError(
+          'CUSTOMER_HAS_ESTIMATES',
+          `This customer has ${estimates === 1 ? 'an estimate' : `${estimates} estimates`}, so they stay on file. Their estimates and jobs keep their details.`,
+        );
+      }
+      await manager
+        .getRepository(Customer)
+        .delete({ id: customer.id, companyId: customer.companyId });
+    });
   }
 
   async addSite(customerId: string, input: CreateSiteInput): Promise<SiteView> {

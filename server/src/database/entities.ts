@@ -1,5 +1,6 @@
 import { ChangeOrder } from '../change-orders/entities/change-order.entity';
 import { LoginFailure } from '../auth/entities/login-failure.entity';
+import { QuoteTokenFailure } from '../quotes/entities/quote-token-failure.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { CompanyLogo } from '../companies/entities/company-logo.entity';
 import { Company } from '../companies/entities/company.entity';
@@ -32,6 +33,7 @@ export const entities = [
   Invite,
   RefreshToken,
   LoginFailure,
+  QuoteTokenFailure,
   PriceBookVersion,
   PricedTakeoff,
   Customer,

@@ -9,6 +9,7 @@ import {
   PRICE_CATEGORIES,
   priceLine,
   priceTakeoff,
+  reducePricedLines,
   roundMoney,
   roundQuantity,
   sumDecimals,
@@ -30,7 +31,10 @@ const MANUAL_PREFIX = 'manual:';
  * (`priceLine`). Manual base lines join the base lines and the totals are recomputed with
  * `estimateTotals` (so discount, tax, minimum job charge and the approval check cover them); manual
  * add-ons and alternates each become an option of their own. Manual lines get no contingency: it is a
- * share of the generated direct cost only. Input problems answer 400 with fields named `input.<path>`.
+ * share of the generated direct cost only. Work change orders took off (`lineReductions`) is taken
+ * off the priced lines, generated or manual, before the totals (`reducePricedLines`); the contingency
+ * stays as priced unless its own line is reduced, as new manual work adds none. Input problems answer
+ * 400 with fields named `input.<path>`.
  */
 export function priceEstimateContent(
   content: UncheckedContent,
@@ -55,11 +59,23 @@ export function priceEstimateContent(
     discountPct: content.discountPct,
   });
 
-  const manual = content.manualLines.map((line) => priceManualLine(line, book));
-  const lines = [...generated.lines, ...manual.filter((line) => line.optionId === null)].sort(
-    (a, b) => PRICE_CATEGORIES.indexOf(a.category) - PRICE_CATEGORIES.indexOf(b.category),
+  const reduced = reducePricedLines(
+    [...generated.lines, ...content.manualLines.map((line) => priceManualLine(line, book))],
+    content.lineReductions ?? [],
   );
-  const manualOptions = manual
+  if (reduced.unknownLineIds.length > 0) {
+    throw fieldErrors([
+      {
+        field: 'lineReductions',
+        message: `Work was taken off lines the estimate no longer has: ${reduced.unknownLineIds.join(', ')}`,
+      },
+    ]);
+  }
+  // The generated lines are all base lines: only manual add-ons and alternates carry an option.
+  const lines = reduced.lines
+    .filter((line) => line.optionId === null)
+    .sort((a, b) => PRICE_CATEGORIES.indexOf(a.category) - PRICE_CATEGORIES.indexOf(b.category));
+  const manualOptions = reduced.lines
     .filter((line) => line.optionId !== null)
     .map((line): PricedOption => {
       const tax = line.taxable

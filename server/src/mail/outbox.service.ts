@@ -5,9 +5,13 @@ import {
   type OnModuleDestroy,
 } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import type { EmailDeliveryView } from '@pondwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, type EntityManager } from 'typeorm';
+import { AppError } from '../common/errors/app-error';
+import { isUuid } from '../common/tenancy/tenant-repository';
 import { AppConfig } from '../config/app-config';
+import { emailDeliveryView, type EmailDeliveryRow } from './email-delivery';
 import { OutboxMessage, type OutboxAttachment } from './entities/outbox-message.entity';
 import { MailAttachments } from './mail-attachments';
 import { MailTransport } from './mail-transport';
@@ -69,6 +73,37 @@ export class OutboxService implements OnApplicationBootstrap, OnModuleDestroy {
         attempts: 0,
         nextAttemptAt: new Date(),
       }),
+    );
+  }
+
+  /**
+   * Puts a message the worker gave up on back in the queue, due now with its attempts restarted from
+   * zero, and records who asked and when. The Message-ID stays, so should the earlier attempts have
+   * reached the recipient after all, the copies are still recognisably one message. 404 `NOT_FOUND`
+   * for another company's message (or a malformed id), 409 `MAIL_NOT_FAILED` for one that is still
+   * queued or was sent (two people pressing at once: only the first puts it back).
+   */
+  async retry(id: string, companyId: string, actorId: string): Promise<EmailDeliveryView> {
+    if (!isUuid(id)) throw new AppError('NOT_FOUND', 'E-mail not found');
+    const [rows] = (await this.dataSource.query(
+      `UPDATE outbox_messages
+       SET status = 'pending', attempts = 0, next_attempt_at = now(), locked_until = NULL,
+           retried_at = now(), retried_by = $3
+       WHERE id = $1 AND company_id = $2 AND status = 'failed'
+       RETURNING id, status, attempts, last_error, sent_at, retried_at`,
+      [id, companyId, actorId],
+    )) as [EmailDeliveryRow[], number];
+    if (rows[0]) return emailDeliveryView(rows[0]);
+    const [current] = (await this.dataSource.query(
+      `SELECT status FROM outbox_messages WHERE id = $1 AND company_id = $2`,
+      [id, companyId],
+    )) as Array<{ status: EmailDeliveryView['status'] }>;
+    if (!current) throw new AppError('NOT_FOUND', 'E-mail not found');
+    throw new AppError(
+      'MAIL_NOT_FAILED',
+      current.status === 'sent'
+        ? 'This e-mail was delivered; there is nothing to send again.'
+        : 'This e-mail is still queued; the outbox keeps trying to send it.',
     );
   }
 

@@ -5,6 +5,7 @@ import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { AppConfig } from '../config/app-config';
 import { PublicQuotesService } from '../quotes/public-quotes.service';
+import { WrongTokenThrottle } from '../quotes/wrong-token-throttle.service';
 
 /** The homeowner's quote page, `/q/<token>`; `/q/` alone gets the page too, which says "not found". */
 export const QUOTE_PAGE_ROUTE = '/q/{*token}';
@@ -43,11 +44,20 @@ export class QuotePageHostModule implements OnModuleInit {
     const app = this.adapterHost.httpAdapter.getInstance<Express>();
     // Found wherever the quotes module provides it, without importing that module here.
     const quotes = this.moduleRef.get(PublicQuotesService, { strict: false });
+    const throttle = this.moduleRef.get(WrongTokenThrottle, { strict: false });
     app.get(QUOTE_PAGE_ROUTE, (request: Request, response: Response, next: NextFunction) => {
       // Express 5 hands a wildcard over as its path segments; the token is the first.
       const segments = request.params.token as unknown as string[] | string | undefined;
       const token = (Array.isArray(segments) ? segments[0] : segments) ?? '';
-      quotes.pageStatus(token).then(
+      const ip = request.ip ?? 'unknown';
+      // The page counts wrong tokens like the API does (PublicLinkInterceptor), so neither is a free oracle.
+      const status = async (): Promise<number> => {
+        if (await throttle.isBlocked(ip)) return 429;
+        const found = await quotes.pageStatus(token);
+        if (found === 404) await throttle.recordFailure(ip);
+        return found;
+      };
+      status().then(
         (status) => this.sendPage(file, status, response, next),
         (error: unknown) => next(error),
       );

@@ -9,6 +9,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AppConfig } from '../config/app-config';
 import { PublicQuotesService } from '../quotes/public-quotes.service';
+import { WrongTokenThrottle } from '../quotes/wrong-token-throttle.service';
 import { QUOTE_PAGE_ROUTE, QuotePageHostModule } from './quote-page-host.module';
 
 // A built client of two pages, served as app.module serves it: the staff app's index.html for page
@@ -16,6 +17,18 @@ import { QUOTE_PAGE_ROUTE, QuotePageHostModule } from './quote-page-host.module'
 const dist = mkdtempSync(join(tmpdir(), 'pondwright-dist-'));
 writeFileSync(join(dist, 'index.html'), '<!doctype html><title>staff app</title>');
 writeFileSync(join(dist, 'quote.html'), '<!doctype html><title>quote page</title>');
+
+// The wrong-token count, in memory: the real one (PostgreSQL) is tested in quote-link-hardening.
+const WRONG_TOKENS_ALLOWED = 3;
+const wrongTokensFrom: string[] = [];
+const throttle = {
+  isBlocked: (ip: string) =>
+    Promise.resolve(wrongTokensFrom.filter((from) => from === ip).length >= WRONG_TOKENS_ALLOWED),
+  recordFailure: (ip: string) => {
+    wrongTokensFrom.push(ip);
+    return Promise.resolve();
+  },
+};
 
 @Global()
 @Module({
@@ -29,8 +42,9 @@ writeFileSync(join(dist, 'quote.html'), '<!doctype html><title>quote page</title
           Promise.resolve(token === 'qt_expired' ? 410 : token === 'qt_unknown' ? 404 : 200),
       },
     },
+    { provide: WrongTokenThrottle, useValue: throttle },
   ],
-  exports: [AppConfig, PublicQuotesService],
+  exports: [AppConfig, PublicQuotesService, WrongTokenThrottle],
 })
 class ConfigStub {}
 
@@ -74,6 +88,20 @@ describe('the quote page host', () => {
     expect(unknown.text).toContain('quote page');
     const expired = await request(app.getHttpServer()).get('/q/qt_expired').expect(410);
     expect(expired.text).toContain('quote page');
+  });
+
+  it('counts unknown links per address and answers 429 once too many were tried', async () => {
+    wrongTokensFrom.length = 0;
+    // A dead link is a real link, not a guess: it is not counted.
+    await request(app.getHttpServer()).get('/q/qt_expired').expect(410);
+    expect(wrongTokensFrom).toHaveLength(0);
+    for (let attempt = 0; attempt < WRONG_TOKENS_ALLOWED; attempt++) {
+      await request(app.getHttpServer()).get('/q/qt_unknown').expect(404);
+    }
+    expect(wrongTokensFrom).toHaveLength(WRONG_TOKENS_ALLOWED);
+    const blocked = await request(app.getHttpServer()).get('/q/qt_7hGm2pXc9RkLw4Vn').expect(429);
+    expect(blocked.text).toContain('quote page');
+    wrongTokensFrom.length = 0;
   });
 
   it('leaves the staff app’s pages and the API alone', async () => {

@@ -22,7 +22,8 @@ import { QuoteLink } from './entities/quote-link.entity';
 import { HOMEOWNER, recordEstimateEvent } from './estimate-events';
 import type { RequestMeta } from './public-link';
 import { quoteAcceptedHomeownerMail, quoteAnsweredStaffMail, money } from './quote-mail';
-import { CONSENT_TEXT } from './quote-view';
+import { termsOfLink } from './quote-terms';
+import { CONSENT_TEXT, quoteTermsShown } from './quote-view';
 
 /**
  * What the homeowner does through the quote's own link: accept or decline the estimate's version, then
@@ -68,6 +69,12 @@ export class PublicQuoteLinkService {
       chosenIds: request.optionIds,
     });
     const acceptedAt = new Date();
+    // The terms the page listed above the checkbox, recorded with the consent words that point to them.
+    const termsShown = quoteTermsShown({
+      computed: version.computed,
+      expiresAt: link.expiresAt,
+      companyTerms: await termsOfLink(manager, link, null),
+    });
     await manager.save(
       manager.create(QuoteAcceptance, {
         companyId: link.companyId,
@@ -76,6 +83,7 @@ export class PublicQuoteLinkService {
         linkId: link.id,
         fullName: request.fullName,
         consentText: CONSENT_TEXT,
+        termsShown,
         ip: meta.ip,
         userAgent: meta.userAgent.slice(0, 1000),
         optionIds: totals.optionIds,

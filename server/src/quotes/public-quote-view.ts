@@ -13,6 +13,7 @@ import { User } from '../users/entities/user.entity';
 import type { QuoteLink } from './entities/quote-link.entity';
 import { renderQuotePdf } from './quote-pdf/render-quote-pdf';
 import { acceptanceView, loadQuoteRecords, paymentView } from './quote-records';
+import { termsOfLink } from './quote-terms';
 import { buildQuoteView } from './quote-view';
 
 /**
@@ -47,6 +48,7 @@ export async function loadPublicQuoteView(
     ? await manager.findOneByOrFail(Invoice, { id: link.invoiceId })
     : null;
   const decline = records.decline?.linkId === link.id ? records.decline : null;
+  const companyTerms = await termsOfLink(manager, link, records.acceptance?.linkId ?? null);
   return buildQuoteView({
     companyName: company.name,
     hasLogo,
@@ -58,6 +60,7 @@ export async function loadPublicQuoteView(
       : null,
     version,
     link,
+    companyTerms,
     acceptance: acceptance ? acceptanceView(acceptance) : null,
     payment: acceptance && records.payment ? paymentView(records.payment) : null,
     declinedAt: decline?.declinedAt ?? null,

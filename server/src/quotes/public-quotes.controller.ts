@@ -1,19 +1,33 @@
-import { Body, Controller, Get, Headers, HttpCode, Param, Post, Req, Res } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  Headers,
+  HttpCode,
+  Param,
+  Post,
+  Req,
+  Res,
+  UseInterceptors,
+} from '@nestjs/common';
 import { ApiBody, ApiTags } from '@nestjs/swagger';
 import type { CheckoutRedirect, QuoteView } from '@pondwright/shared';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/auth.decorators';
 import type { RequestMeta } from './public-link';
+import { PublicLinkInterceptor } from './public-link.interceptor';
 import { PublicQuotesService } from './public-quotes.service';
 import { acceptQuoteBodyDoc, declineQuoteBodyDoc } from './dto/quote.dto';
 import { sendPdf } from './send-pdf';
 
 /**
  * The homeowner's quote, reached by the link's token alone. Answers are never cached: each carries the
- * homeowner's name and prices, and "viewed" must be recorded by the server.
+ * homeowner's name and prices, and "viewed" must be recorded by the server (PublicLinkInterceptor sends
+ * `no-store` and slows an address that tries wrong tokens).
  */
 @ApiTags('quotes (public)')
 @Public()
+@UseInterceptors(PublicLinkInterceptor)
 @Controller('quotes/:token')
 export class PublicQuotesController {
   constructor(private readonly quotes: PublicQuotesService) {}

@@ -18,12 +18,14 @@ import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { Estimate } from '../estimates/entities/estimate.entity';
 import { findEstimate, lockEstimate } from '../estimates/lock-estimate';
 import { parseBody } from '../common/validation/parse-body';
+import { emailDeliveryView, type EmailDeliveryRow } from '../mail/email-delivery';
 import { OutboxService } from '../mail/outbox.service';
 import { User } from '../users/entities/user.entity';
 import { QuoteLink } from './entities/quote-link.entity';
 import { recordEstimateEvent } from './estimate-events';
 import { quoteSentMail } from './quote-mail';
 import { acceptanceView, loadQuoteRecords, staffPaymentView } from './quote-records';
+import { currentQuoteTerms } from './quote-terms';
 
 /** Statuses from which the latest version may be sent (again). */
 const SENDABLE: ReadonlyArray<EstimateStatus> = [
@@ -74,6 +76,11 @@ export class QuoteLinksService {
       );
       const token = newSecureToken();
       const expiresAt = new Date(now.getTime() + request.expiresInDays * 86_400_000);
+      const [company, customer, sender] = await Promise.all([
+        manager.findOneByOrFail(Company, { id: estimate.companyId }),
+        manager.findOneByOrFail(Customer, { id: estimate.customerId }),
+        manager.findOneByOrFail(User, { id: actorId }),
+      ]);
       const link = await manager.save(
         manager.create(QuoteLink, {
           companyId: estimate.companyId,
@@ -84,14 +91,11 @@ export class QuoteLinksService {
           expiresAt,
           revokedAt: null,
           firstViewedAt: null,
+          // Frozen here: editing the company's terms later changes only the quotes sent after.
+          quoteTerms: currentQuoteTerms(company),
           createdById: actorId,
         }),
       );
-      const [company, customer, sender] = await Promise.all([
-        manager.findOneByOrFail(Company, { id: estimate.companyId }),
-        manager.findOneByOrFail(Customer, { id: estimate.customerId }),
-        manager.findOneByOrFail(User, { id: actorId }),
-      ]);
       const mail = quoteSentMail({
         companyName: company.name,
         customerName: customer.name,
@@ -201,29 +205,13 @@ export class QuoteLinksService {
   ): Promise<Map<string, QuoteLinkView['email']>> {
     if (linkIds.length === 0) return new Map();
     const rows = (await manager.query(
-      `SELECT a."linkId" AS link_id, m.status, m.attempts, m.last_error, m.sent_at
+      `SELECT a."linkId" AS link_id, m.id, m.status, m.attempts, m.last_error, m.sent_at, m.retried_at
        FROM outbox_messages m
        CROSS JOIN LATERAL jsonb_to_recordset(m.attachments) AS a("linkId" text)
        WHERE m.kind = 'quote-sent' AND m.company_id = $1 AND a."linkId" = ANY($2::text[])`,
       [this.tenant.companyId, linkIds],
-    )) as Array<{
-      link_id: string;
-      status: 'pending' | 'sent' | 'failed';
-      attempts: number;
-      last_error: string | null;
-      sent_at: Date | null;
-    }>;
-    return new Map(
-      rows.map((row) => [
-        row.link_id,
-        {
-          status: row.status,
-          attempts: row.attempts,
-          lastError: row.last_error,
-          sentAt: row.sent_at ? new Date(row.sent_at).toISOString() : null,
-        },
-      ]),
-    );
+    )) as Array<EmailDeliveryRow & { link_id: string }>;
+    return new Map(rows.map((row) => [row.link_id, emailDeliveryView(row)]));
   }
 
   private lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {

@@ -1,4 +1,5 @@
 import {
+  quoteTermsParagraphs,
   type EstimateComputed,
   type EstimateContent,
   type QuoteAcceptanceView,
@@ -28,6 +29,8 @@ export type QuoteViewSource = {
     computed: EstimateComputed;
   };
   link: { createdAt: Date; expiresAt: Date };
+  /** The company’s terms the link was sent with (`termsOfLink`). */
+  companyTerms: string;
   acceptance: QuoteAcceptanceView | null;
   payment: QuotePaymentView | null;
   declinedAt: Date | null;
@@ -86,7 +89,11 @@ export function buildQuoteView(source: QuoteViewSource): QuoteView {
       tax: option.tax,
     })),
     depositPct: totals.depositPct,
-    terms: terms(totals.depositPct, totals.salesTaxPct, source.link.expiresAt),
+    terms: quoteTermsShown({
+      computed,
+      expiresAt: source.link.expiresAt,
+      companyTerms: source.companyTerms,
+    }),
     cautions: homeownerCautions(computed.takeoff),
     acceptance: source.acceptance,
     payment: source.payment,
@@ -162,14 +169,21 @@ function included(computed: EstimateComputed): string[] {
   return [...new Set(items)];
 }
 
-function terms(depositPct: string, salesTaxPct: string, expiresAt: Date): string[] {
-  const until = expiresAt.toISOString().slice(0, 10);
+/**
+ * The terms listed above the consent checkbox: first what the quote itself fixes (how long the prices
+ * hold, the deposit, the sales tax), then the company's own terms, one item per paragraph.
+ */
+export function quoteTermsShown(args: {
+  computed: EstimateComputed;
+  expiresAt: Date;
+  companyTerms: string;
+}): string[] {
+  const { depositPct, salesTaxPct } = args.computed.priced.totals;
+  const until = args.expiresAt.toISOString().slice(0, 10);
   return [
     `Prices are good until ${until}. After that we may need to re-price materials.`,
     `A deposit of ${depositPct} % of the accepted total is due on acceptance to schedule the work; the balance is due on completion.`,
     `Sales tax at ${salesTaxPct} % is included where it applies.`,
-    'Changes to the work after acceptance are agreed in writing, with their price, before they are made.',
-    'Buried obstructions we could not see when measuring (ledge rock, old footings, large roots) are priced as a change if they add work.',
-    'Plants and fish are not included unless they are listed.',
+    ...quoteTermsParagraphs(args.companyTerms),
   ];
 }

@@ -13,7 +13,9 @@ import { renderPublicQuotePdf } from './public-quote-view';
 import { PublicQuotesService } from './public-quotes.service';
 import { QuoteExpiryService } from './quote-expiry.service';
 import { QuoteLinksService } from './quote-links.service';
+import { PublicLinkInterceptor } from './public-link.interceptor';
 import { StaffQuotePdfService } from './staff-quote-pdf.service';
+import { WrongTokenThrottle } from './wrong-token-throttle.service';
 
 @Module({
   imports: [PaymentsModule],
@@ -26,8 +28,10 @@ import { StaffQuotePdfService } from './staff-quote-pdf.service';
     StaffQuotePdfService,
     QuoteExpiryService,
     ChangeOrderAnswers,
+    WrongTokenThrottle,
+    PublicLinkInterceptor,
   ],
-  exports: [PublicQuotesService],
+  exports: [PublicQuotesService, WrongTokenThrottle],
 })
 export class QuotesModule implements OnModuleInit {
   constructor(

@@ -3,11 +3,13 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
+import { Company } from '../companies/entities/company.entity';
 import { EstimateVersion } from '../estimates/entities/estimate-version.entity';
 import { findEstimate } from '../estimates/lock-estimate';
 import { QuoteAcceptance } from './entities/quote-acceptance.entity';
 import { QuoteLink } from './entities/quote-link.entity';
 import { renderPublicQuotePdf } from './public-quote-view';
+import { currentQuoteTerms } from './quote-terms';
 
 /** Days a preview PDF (of a version not sent yet) says it is good for, as a new link would. */
 const PREVIEW_VALID_DAYS = 30;
@@ -44,6 +46,7 @@ export class StaffQuotePdfService {
     if (!version) {
       throw new AppError('ESTIMATE_NOT_SENDABLE', 'Finalise the estimate to make its quote PDF.');
     }
+    const company = await manager.findOneByOrFail(Company, { id: estimate.companyId });
     const now = new Date();
     const preview = Object.assign(new QuoteLink(), {
       id: '00000000-0000-0000-0000-000000000000',
@@ -53,6 +56,7 @@ export class StaffQuotePdfService {
       createdById: actorId,
       createdAt: now,
       expiresAt: new Date(now.getTime() + PREVIEW_VALID_DAYS * 86_400_000),
+      quoteTerms: currentQuoteTerms(company),
     });
     return renderPublicQuotePdf(manager, preview);
   }

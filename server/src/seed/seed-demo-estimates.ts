@@ -1,6 +1,6 @@
 import type { EstimateContent, EstimateStatus } from '@pondwright/shared';
 import { examplePondInput } from '@pondwright/shared/engine';
-import { quoteSelectionTotals } from '@pondwright/shared';
+import { DEFAULT_QUOTE_TERMS, quoteSelectionTotals } from '@pondwright/shared';
 import { createHash, randomBytes } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { Customer } from '../customers/entities/customer.entity';
@@ -14,7 +14,7 @@ import { Payment } from '../payments/entities/payment.entity';
 import { PriceBookVersion } from '../price-book/entities/price-book-version.entity';
 import { QuoteAcceptance } from '../quotes/entities/quote-acceptance.entity';
 import { QuoteLink } from '../quotes/entities/quote-link.entity';
-import { CONSENT_TEXT } from '../quotes/quote-view';
+import { CONSENT_TEXT, quoteTermsShown } from '../quotes/quote-view';
 import { addDemoJob } from './seed-demo-job';
 
 type DemoEstimate = {
@@ -172,6 +172,7 @@ async function acceptWithPaidDeposit(
       expiresAt: new Date(sentAt.getTime() + 30 * 86_400_000),
       revokedAt: null,
       firstViewedAt: new Date(sentAt.getTime() + 3_600_000),
+      quoteTerms: DEFAULT_QUOTE_TERMS,
       createdById: estimatorId,
       createdAt: sentAt,
     }),
@@ -193,6 +194,11 @@ async function acceptWithPaidDeposit(
       linkId: link.id,
       fullName: customer.name,
       consentText: CONSENT_TEXT,
+      termsShown: quoteTermsShown({
+        computed: version.computed,
+        expiresAt: link.expiresAt,
+        companyTerms: DEFAULT_QUOTE_TERMS,
+      }),
       ip: '192.0.2.10',
       userAgent: 'Demo data',
       optionIds: totals.optionIds,

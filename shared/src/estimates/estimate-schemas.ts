@@ -3,6 +3,7 @@ import type { TakeoffInput } from '../engine/schemas/takeoff-input';
 import type { Takeoff } from '../engine/schemas/takeoff-output';
 import type { PricedLineChange, PricedTotalChange } from '../pricing/price-book-diff';
 import type { PricedEstimate } from '../pricing/priced-estimate-schema';
+import type { LineReduction } from '../pricing/reduce-lines';
 
 /**
  * Estimates: a working draft the estimator saves, numbered immutable versions, and the owner's
@@ -105,6 +106,11 @@ export const estimateContentSchema = z.object({
 });
 export type EstimateContent = Omit<z.infer<typeof estimateContentSchema>, 'input'> & {
   input: TakeoffInput;
+  /**
+   * Work credited by accepted or pending change orders: priced lines of the version repriced at a
+   * smaller quantity (`reducePricedLines`). Only change orders set it; a draft never carries it.
+   */
+  lineReductions?: LineReduction[];
 };
 
 /** `PUT /api/estimates/:id/draft`: the content plus the draft revision it was edited from. */

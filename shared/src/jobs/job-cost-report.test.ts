@@ -29,6 +29,14 @@ function budgetWithoutLabor(): JobBudget {
   };
 }
 
+/** Disposal counted in loads of a given size (loose yd³), priced by the budget. */
+function loadsEntry(code: string | null, description: string, loads: string, size: string) {
+  return {
+    ...quantityEntry('disposal', null, code, description, loads, 'load', null),
+    loadVolumeLooseCubicYards: size,
+  };
+}
+
 describe('job cost report fixtures', () => {
   it('are logs the API would accept', () => {
     for (const log of fixtureLogs()) {
@@ -385,12 +393,167 @@ describe('jobCostReport: equipment, disposal and other', () => {
         budgeted: true,
         estimatedQuantity: '6.5',
         actualQuantity: '7',
+        loggedLoads: null,
         budgetUnitCost: '38.00',
         estimatedCost: '247.00',
         actualCost: '274.00',
         variance: '27.00',
       },
     ]);
+  });
+
+  it('converts loads to loose yd³ at the load size to compare with the budget', () => {
+    const logs = [
+      {
+        logDate: '2025-05-12',
+        entries: [
+          loadsEntry('HAUL-YD', 'Tri-axle loads', '3', '10'),
+          quantityEntry('disposal', null, 'HAUL-YD', 'Haul-off', '0', 'load', null),
+        ],
+      },
+    ];
+    const r = report({ logs });
+    // 3 loads × 10 yd³ = 30 yd³ against a budget of 6.5 yd³ → 23.5 yd³ over;
+    // cost 30 × the budget's 38.00 = 1140.00 against 6.5 × 38.00 = 247.00 → +893.00
+    expect(r.disposal).toEqual([
+      {
+        key: 'code:haul-yd|cu yd',
+        code: 'HAUL-YD',
+        description: 'Spoil haul-off and tipping, per loose yd³',
+        unit: 'cu yd',
+        budgeted: true,
+        estimatedQuantity: '6.5',
+        actualQuantity: '30',
+        loggedLoads: '3',
+        budgetUnitCost: '38.00',
+        estimatedCost: '247.00',
+        actualCost: '1140.00',
+        variance: '893.00',
+      },
+    ]);
+    expect(r.warnings).toEqual([]);
+    expect(r.notes).toContain(
+      "Spoil haul-off and tipping, per loose yd³: 3 loads logged count as 30 cu yd (3 × 10 yd³), at each truck's or container's nominal capacity; a load is rarely filled exactly, so this can overstate what was hauled.",
+    );
+    expect(r.categories.find((c) => c.category === 'disposal')).toMatchObject({
+      estimatedCost: '247.00',
+      actualCost: '1140.00',
+      variance: '893.00',
+    });
+  });
+
+  it('sets 3 loads of 10 yd³ against a budget of 27 yd³: 3 yd³ over, at the budget’s unit cost', () => {
+    const budget = fixtureBudget();
+    const haul = budget.lines.find((line) => line.code === 'HAUL-YD')!;
+    // 27 yd³ × 38.00 = 1026.00; the budget's cost moves from 247.00 to 1026.00: 4286.98 + 779.00
+    Object.assign(haul, { quantity: '27', extendedCost: '1026.00' });
+    budget.cost = '5065.98';
+    const logs = [
+      { logDate: '2025-05-12', entries: [loadsEntry('HAUL-YD', 'Haul-off', '3', '10')] },
+    ];
+    const r = report({ budget, logs });
+    // 3 × 10 = 30 yd³ − 27 yd³ = 3 yd³ over; 30 × 38.00 = 1140.00 − 1026.00 = 114.00 = 3 × 38.00
+    expect(r.disposal[0]).toMatchObject({
+      estimatedQuantity: '27',
+      actualQuantity: '30',
+      loggedLoads: '3',
+      estimatedCost: '1026.00',
+      actualCost: '1140.00',
+      variance: '114.00',
+    });
+    expect(r.warnings).toEqual([]);
+  });
+
+  it('adds up loads of different sizes, and prices a load’s own unit cost per load', () => {
+    const logs = [
+      { logDate: '2025-05-12', entries: [loadsEntry('HAUL-YD', 'Tandem', '2', '10')] },
+      {
+        logDate: '2025-05-13',
+        entries: [
+          loadsEntry('HAUL-YD', 'Skid-steer trailer', '1.5', '6.25'),
+          { ...loadsEntry('HAUL-YD', 'Roll-off, ticket 881', '1', '20'), unitCost: '455.00' },
+        ],
+      },
+    ];
+    const r = report({ logs });
+    // yd³: 2 × 10 + 1.5 × 6.25 + 1 × 20 = 20 + 9.375 + 20 = 49.375; loads 2 + 1.5 + 1 = 4.5
+    // cost: 20 × 38.00 = 760.00; 9.375 × 38.00 = 356.25; the roll-off at its ticket's 455.00 a load
+    //       → 760.00 + 356.25 + 455.00 = 1571.25 against 247.00 → +1324.25
+    expect(r.disposal[0]).toMatchObject({
+      actualQuantity: '49.375',
+      loggedLoads: '4.5',
+      actualCost: '1571.25',
+      variance: '1324.25',
+    });
+    expect(r.notes).toContain(
+      "Spoil haul-off and tipping, per loose yd³: 4.5 loads logged count as 49.375 cu yd (2 × 10 yd³ + 1.5 × 6.25 yd³ + 1 × 20 yd³), at each truck's or container's nominal capacity; a load is rarely filled exactly, so this can overstate what was hauled.",
+    );
+  });
+
+  it('still warns for loads without a load size, and for loads against a budget in tons', () => {
+    const budget = fixtureBudget();
+    // A second disposal priced by weight: 4 t × 45.00 = 180.00 (cost 4286.98 + 180.00 = 4466.98)
+    budget.lines.push({
+      ...budget.lines.find((line) => line.code === 'HAUL-YD')!,
+      id: 'disposal:TIP-TON',
+      code: 'TIP-TON',
+      description: 'Tipping by weight',
+      quantity: '4',
+      unit: 'short ton',
+      unitCost: '45.00',
+      extendedCost: '180.00',
+    });
+    budget.cost = '4466.98';
+    const logs = [
+      {
+        logDate: '2025-05-12',
+        entries: [
+          quantityEntry('disposal', null, 'HAUL-YD', 'Old log loads', '2', 'load', null),
+          loadsEntry('TIP-TON', 'Loads to the tip', '2', '10'),
+        ],
+      },
+    ];
+    const r = report({ budget, logs });
+    expect(r.warnings).toEqual([
+      "2025-05-12: Old log loads was logged in load without a load size, so it cannot be converted to the budget's cu yd for HAUL-YD; counted as 2 cu yd.",
+      '2025-05-12: Loads to the tip was logged in load, but the budget counts TIP-TON in short ton; counted as 2 short ton.',
+    ]);
+    // counted as logged, as before: 2 × 38.00 = 76.00 and 2 × 45.00 = 90.00; nothing converted
+    expect(r.disposal.map((row) => [row.actualQuantity, row.loggedLoads, row.actualCost])).toEqual([
+      ['2', null, '76.00'],
+      ['2', null, '90.00'],
+    ]);
+  });
+
+  it('keeps loads as loads when the budget counts loads, and an unbudgeted haul in its own unit', () => {
+    const budget = fixtureBudget();
+    const haul = budget.lines.find((line) => line.code === 'HAUL-YD')!;
+    // 2 loads × 150.00 = 300.00 (cost 4286.98 − 247.00 + 300.00 = 4339.98)
+    Object.assign(haul, {
+      quantity: '2',
+      unit: 'load',
+      unitCost: '150.00',
+      extendedCost: '300.00',
+    });
+    budget.cost = '4339.98';
+    const logs = [
+      {
+        logDate: '2025-05-12',
+        entries: [
+          loadsEntry('HAUL-YD', 'Haul-off', '3', '10'),
+          { ...loadsEntry(null, 'Concrete chunks', '1', '6'), unitCost: '95.00' },
+        ],
+      },
+    ];
+    const r = report({ budget, logs });
+    // 3 loads × 150.00 = 450.00 against 300.00; the chunks: 1 load at its 95.00
+    expect(
+      r.disposal.map((row) => [row.unit, row.actualQuantity, row.loggedLoads, row.actualCost]),
+    ).toEqual([
+      ['load', '3', null, '450.00'],
+      ['load', '1', null, '95.00'],
+    ]);
+    expect(r.warnings).toEqual([]);
   });
 
   it('counts mobilization as incurred and contingency as 0', () => {
@@ -591,11 +754,12 @@ describe('jobCostReport: properties', () => {
         fc.constantFrom(...codes),
         fc.constantFrom('Item', 'Other item'),
         decimalString(50, 3),
-        fc.constantFrom('sq ft', 'short ton', 'day', 'each', 'cu yd'),
+        fc.constantFrom('sq ft', 'short ton', 'day', 'each', 'cu yd', 'load'),
         unitCost,
+        fc.option(decimalString(40, 2), { nil: undefined }),
       )
-      .map(([kind, movement, code, description, quantity, unit, cost]) =>
-        quantityEntry(
+      .map(([kind, movement, code, description, quantity, unit, cost, loadSize]) => {
+        const entry = quantityEntry(
           kind,
           kind === 'material' ? movement : null,
           code,
@@ -603,8 +767,11 @@ describe('jobCostReport: properties', () => {
           quantity,
           unit,
           cost,
-        ),
-      ),
+        );
+        return kind === 'disposal' && unit === 'load' && loadSize !== undefined
+          ? { ...entry, loadVolumeLooseCubicYards: loadSize }
+          : entry;
+      }),
   );
   const date = fc.constantFrom(
     '2025-05-12',

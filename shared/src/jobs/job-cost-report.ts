@@ -12,6 +12,7 @@ import {
   toDecimal,
 } from '../pricing/money';
 import { PRICE_CATEGORIES, type PriceCategory } from '../pricing/price-book-schema';
+import { isLoadUnit, isLooseCubicYardUnit } from './disposal-loads';
 import type { BudgetLine, JobBudget, LogEntry, QuantityEntry } from './job-schemas';
 
 /** Where a labor row's hourly rate comes from: its own budget lines, the budget's average, or nowhere. */
@@ -78,7 +79,13 @@ export type QuantityCostRow = {
   unit: string;
   budgeted: boolean;
   estimatedQuantity: string;
+  /** In `unit`; disposal logged in loads with a load size is counted here as loads × size. */
   actualQuantity: string;
+  /**
+   * Disposal only: the loads logged with a load size and converted to `unit` (loose yd³) at their
+   * nominal capacity, as the crew counted them; null when no loads were converted.
+   */
+  loggedLoads: string | null;
   budgetUnitCost: string | null;
   estimatedCost: string;
   actualCost: string;
@@ -195,6 +202,8 @@ type QuantityTally = {
   returned: Decimal[];
   actual: Decimal;
   actualCost: Decimal;
+  /** Disposal loads converted to loose yd³, by load size (loose yd³, as logged). */
+  loads: Map<string, Decimal>;
 };
 
 function tally(
@@ -218,7 +227,22 @@ function tally(
     returned: [],
     actual: ZERO,
     actualCost: ZERO,
+    loads: new Map<string, Decimal>(),
   };
+}
+
+/**
+ * A disposal entry counted in loads, with its load size, against a row counted in loose yd³: the
+ * loads × the load's nominal capacity, in loose yd³. Null when the entry is not converted.
+ */
+function loadsAsLooseCubicYards(
+  entry: QuantityEntry,
+  quantity: Decimal,
+  rowUnit: string,
+): Decimal | null {
+  if (entry.kind !== 'disposal' || entry.loadVolumeLooseCubicYards === undefined) return null;
+  if (!isLoadUnit(entry.unit) || !isLooseCubicYardUnit(rowUnit)) return null;
+  return quantity.times(toDecimal(entry.loadVolumeLooseCubicYards));
 }
 
 /**
@@ -253,8 +277,12 @@ function tally(
  * delivery), then unbudgeted items:
  * - entries match by code, and by unit when the code has several rows (else its first row that is not
  *   a delivery); a unit that differs from the budget's is warned about and counted in the budget's;
- * - actual quantity = Σ quantity; actual cost = Σ quantity × (entry unit cost ?? budget unit cost),
- *   each entry rounded to cents;
+ * - except disposal logged in loads with a load size against a row in loose yd³: converted, without a
+ *   warning, to loads × the load's nominal capacity (yd³); the loads are kept in `loggedLoads` and a
+ *   note says the figure assumes full loads. Loads without a size are warned about as above;
+ * - actual quantity = Σ quantity (converted); actual cost = Σ quantity × (entry unit cost ?? budget
+ *   unit cost), each entry rounded to cents; an entry's own unit cost is per its unit (per load for
+ *   converted loads), the budget's per the row's unit (per yd³ of the converted figure);
  * - an equipment delivery line (`equipment:delivery`) nothing was logged against is incurred as
  *   quoted once its machine (same code) has any quantity logged, and 0 otherwise.
  *
@@ -407,7 +435,13 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
   const placeEntries = (
     kind: QuantityEntry['kind'],
     rows: QuantityTally[],
-    add: (row: QuantityTally, entry: QuantityEntry, quantity: Decimal) => void,
+    add: (
+      row: QuantityTally,
+      entry: QuantityEntry,
+      quantity: Decimal,
+      /** Loads converted to the row's loose yd³ (see `loadsAsLooseCubicYards`), else null. */
+      looseCubicYards: Decimal | null,
+    ) => void,
   ) => {
     const extras = new Map<string, QuantityTally>();
     for (const log of logs) {
@@ -429,11 +463,17 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
           candidates.length <= 1
             ? candidates[0]
             : (candidates.find((c) => unitKey(c.unit) === unitKey(entry.unit)) ??
+              candidates.find((c) => loadsAsLooseCubicYards(entry, quantity, c.unit) !== null) ??
               candidates.find((c) => !c.delivery) ??
               candidates[0]);
-        if (row && unitKey(row.unit) !== unitKey(entry.unit)) {
+        const looseCubicYards = row ? loadsAsLooseCubicYards(entry, quantity, row.unit) : null;
+        if (row && looseCubicYards === null && unitKey(row.unit) !== unitKey(entry.unit)) {
+          const sizeMissing =
+            kind === 'disposal' && isLoadUnit(entry.unit) && isLooseCubicYardUnit(row.unit);
           warnings.push(
-            `${log.logDate}: ${entry.description} was logged in ${entry.unit}, but the budget counts ${row.code} in ${row.unit}; counted as ${formatQuantity(quantity)} ${row.unit}.`,
+            sizeMissing
+              ? `${log.logDate}: ${entry.description} was logged in ${entry.unit} without a load size, so it cannot be converted to the budget's ${row.unit} for ${row.code}; counted as ${formatQuantity(quantity)} ${row.unit}.`
+              : `${log.logDate}: ${entry.description} was logged in ${entry.unit}, but the budget counts ${row.code} in ${row.unit}; counted as ${formatQuantity(quantity)} ${row.unit}.`,
           );
         }
         if (!row) {
@@ -443,7 +483,7 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
           extras.set(key, row);
         }
         row.entries += 1;
-        add(row, entry, quantity);
+        add(row, entry, quantity, looseCubicYards);
       }
     }
     return [...rows, ...extras.values()];
@@ -512,12 +552,20 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
   });
 
   const quantityRows = (category: 'equipment' | 'disposal'): QuantityCostRow[] => {
-    const rows = placeEntries(category, budgetTallies(category, true), (row, entry, q) => {
-      const unitCost =
-        entry.unitCost !== null ? toDecimal(entry.unitCost) : (row.budgetUnitCost ?? ZERO);
+    const rows = placeEntries(category, budgetTallies(category, true), (row, entry, q, yd3) => {
+      const inRowUnit = yd3 ?? q;
+      // The entry's own unit cost is per its own unit (per load); the budget's per the row's (per yd³).
+      const cost =
+        entry.unitCost !== null
+          ? q.times(toDecimal(entry.unitCost))
+          : inRowUnit.times(row.budgetUnitCost ?? ZERO);
       if (entry.unitCost === null && row.budgetUnitCost === null) unpriced(row, 'was logged');
-      row.actual = row.actual.plus(q);
-      row.actualCost = row.actualCost.plus(roundMoney(q.times(unitCost)));
+      row.actual = row.actual.plus(inRowUnit);
+      row.actualCost = row.actualCost.plus(roundMoney(cost));
+      if (yd3 !== null) {
+        const size = toDecimal(entry.loadVolumeLooseCubicYards!).toString();
+        row.loads.set(size, (row.loads.get(size) ?? ZERO).plus(q));
+      }
     });
     for (const row of rows) {
       if (!row.delivery || row.entries > 0 || row.code === null) continue;
@@ -535,7 +583,21 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
       row.actualCost = sumOf(row.lines, 'extendedCost');
       notes.push(`${row.description}: incurred as quoted, since the machine was logged.`);
     }
-    return rows.map((row) => {
+    for (const row of rows) {
+      if (row.loads.size === 0) continue;
+      const sizes = [...row.loads]
+        .map(([size, loads]) => `${formatQuantity(loads)} × ${size} yd³`)
+        .join(' + ');
+      const converted = sumDecimals(
+        [...row.loads].map(([size, loads]) => loads.times(toDecimal(size))),
+      );
+      const loads = sumDecimals([...row.loads.values()]);
+      const counted = loads.equals(1) ? 'load logged counts' : 'loads logged count';
+      notes.push(
+        `${row.description}: ${formatQuantity(loads)} ${counted} as ${formatQuantity(converted)} ${row.unit} (${sizes}), at each truck's or container's nominal capacity; a load is rarely filled exactly, so this can overstate what was hauled.`,
+      );
+    }
+    return rows.map((row): QuantityCostRow => {
       const estimatedCost = sumOf(row.lines, 'extendedCost');
       return {
         key: row.key,
@@ -545,6 +607,8 @@ export function jobCostReport(args: JobCostReportArgs): JobCostReport {
         budgeted: row.lines.length > 0,
         estimatedQuantity: formatQuantity(sumOf(row.lines, 'quantity')),
         actualQuantity: formatQuantity(row.actual),
+        loggedLoads:
+          row.loads.size === 0 ? null : formatQuantity(sumDecimals([...row.loads.values()])),
         budgetUnitCost: row.budgetUnitCost === null ? null : formatUnitCost(row.budgetUnitCost),
         estimatedCost: formatMoney(estimatedCost),
         actualCost: formatMoney(row.actualCost),

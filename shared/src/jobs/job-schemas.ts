@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { LABOR_TASKS, type LaborTask } from '../engine/labor/labor-hours';
 import type { PriceCategory } from '../pricing/price-book-schema';
 import { manualLineSchema } from '../estimates/estimate-schemas';
+import { isLoadUnit, MAX_LOAD_VOLUME_LOOSE_CU_YD } from './disposal-loads';
 
 /**
  * Jobs: an accepted quote becomes a job carrying its budget; the crew lead's daily logs record what
@@ -78,8 +79,25 @@ export const hoursEntrySchema = z
   .strict();
 
 /**
+ * A load's size: the truck's or container's nominal capacity in loose yd³ (10 for a tandem dump truck,
+ * 6 for a skid-steer trailer), up to 2 decimals, more than 0 and at most 40 (a 40 yd³ roll-off).
+ */
+export const loadVolumeLooseCubicYardsSchema = decimal(
+  2,
+  'Enter the load size in loose yd³, such as 10',
+)
+  .refine((v) => Number(v) > 0, 'A load holds more than 0 yd³')
+  .refine(
+    (v) => Number(v) <= MAX_LOAD_VOLUME_LOOSE_CU_YD,
+    `At most ${MAX_LOAD_VOLUME_LOOSE_CU_YD} yd³ a load (the largest roll-off container)`,
+  );
+
+/**
  * Materials delivered (with the supplier's ticket and unit cost), used or returned; equipment and
  * disposal in the budget line's unit (days, loose yd³, loads). `code` ties the entry to a budget line.
+ * Disposal counted in loads may give `loadVolumeLooseCubicYards`, each load's nominal capacity, so the
+ * cost report can set loads × capacity against a budget in loose yd³. It is optional: logs written
+ * before it existed have none, and only disposal in loads may carry it.
  */
 export const quantityEntrySchema = z
   .object({
@@ -93,12 +111,22 @@ export const quantityEntrySchema = z
     unitCost: decimal(4, 'Enter a unit cost such as 12.50').nullable(),
     supplier: z.string().trim().max(120).nullable(),
     ticketNumber: z.string().trim().max(60).nullable(),
+    loadVolumeLooseCubicYards: loadVolumeLooseCubicYardsSchema.optional(),
   })
   .strict()
   .refine((entry) => (entry.kind === 'material') === (entry.movement !== null), {
     message: 'Say whether the material was delivered, used or returned',
     path: ['movement'],
-  });
+  })
+  .refine(
+    (entry) =>
+      entry.loadVolumeLooseCubicYards === undefined ||
+      (entry.kind === 'disposal' && isLoadUnit(entry.unit)),
+    {
+      message: 'Only disposal counted in loads has a load size',
+      path: ['loadVolumeLooseCubicYards'],
+    },
+  );
 
 /** Told apart by `kind`, so a wrong entry's messages name its own fields rather than "Invalid input". */
 export const logEntrySchema = z.discriminatedUnion('kind', [hoursEntrySchema, quantityEntrySchema]);
@@ -149,6 +177,14 @@ export type BudgetLine = {
   unitCost: string;
   extendedCost: string;
   price: string;
+};
+
+/**
+ * A budget line a change order takes work off: its figures once the change is accepted (quantity "0":
+ * the line leaves the budget) and, in `previous`, those it had in the version the change was priced on.
+ */
+export type BudgetLineReduction = Pick<BudgetLine, 'id' | 'quantity' | 'extendedCost' | 'price'> & {
+  previous: Pick<BudgetLine, 'quantity' | 'extendedCost' | 'price'>;
 };
 
 /** What the job was sold for and expected to cost: fixed when the job is made (and by change orders). */
@@ -290,9 +326,27 @@ export type InvoiceView = {
   recipientEmail: string;
 };
 
+/** Work taken off a line of the job's budget: the quantity the job keeps ("0" takes the line off). */
+export const changeOrderReductionSchema = z
+  .object({
+    lineId: z
+      .string({ error: 'Choose a line of the job' })
+      .trim()
+      .min(1, 'Choose a line of the job')
+      .max(200, 'Choose a line of the job'),
+    newQuantity: z
+      .string({ error: 'Enter the quantity the job keeps' })
+      .trim()
+      .regex(/^\d{1,9}(\.\d{1,3})?$/, 'Enter the quantity the job keeps, such as 0 or 2.5'),
+  })
+  .strict();
+export type ChangeOrderReduction = z.infer<typeof changeOrderReductionSchema>;
+
 /**
- * `POST /api/jobs/:id/change-orders`: a scope change, priced like manual lines with the accepted
- * version's price book; it becomes the estimate's next version and is sent for the homeowner to accept.
+ * `POST /api/jobs/:id/change-orders`: a scope change, priced with the accepted version's price book on
+ * top of the version in force; it becomes the estimate's next version and is sent for the homeowner to
+ * accept. New work comes as manual lines; work taken off (a credit) names lines of the job's budget
+ * with the quantity each keeps, priced at the rates they were sold at. A change may do both.
  */
 export const createChangeOrderRequestSchema = z
   .object({
@@ -300,26 +354,59 @@ export const createChangeOrderRequestSchema = z
     reason: z.string().trim().max(2000, 'Use at most 2000 characters').default(''),
     lines: z
       .array(manualLineSchema.extend({ kind: z.literal('base').default('base') }))
-      .min(1, 'Add at least one line')
       .max(50, 'Use at most 50 lines')
       .refine(
         (lines) => new Set(lines.map((l) => l.id)).size === lines.length,
         'Each line needs its own id',
-      ),
+      )
+      .default([]),
+    reductions: z
+      .array(changeOrderReductionSchema)
+      .max(50, 'Take off at most 50 lines')
+      .refine(
+        (reductions) => new Set(reductions.map((r) => r.lineId)).size === reductions.length,
+        'Take each line off once',
+      )
+      .default([]),
   })
-  .strict();
+  .strict()
+  .refine((request) => request.lines.length + request.reductions.length > 0, {
+    message: 'Add a line or take work off',
+    path: ['lines'],
+  });
 export type CreateChangeOrderRequest = z.infer<typeof createChangeOrderRequestSchema>;
 
 export const CHANGE_ORDER_STATUSES = ['ready', 'sent', 'accepted', 'declined'] as const;
 export type ChangeOrderStatus = (typeof CHANGE_ORDER_STATUSES)[number];
 
-/** A change order's priced lines and what it adds to the job. */
+/** What a change order does to a line: new work, less of a line, or the line taken off. */
+export const CHANGE_ORDER_LINE_CHANGES = ['added', 'reduced', 'removed'] as const;
+export type ChangeOrderLineChange = (typeof CHANGE_ORDER_LINE_CHANGES)[number];
+
+/** One line of a change order as the homeowner reads it. */
+export type ChangeOrderLine = {
+  change: ChangeOrderLineChange;
+  description: string;
+  /** The quantity added, or taken off (a positive figure either way). */
+  quantity: string;
+  unit: string;
+  /** For work taken off: the line's quantity before and after the change; null for added lines. */
+  fromQuantity: string | null;
+  toQuantity: string | null;
+  /** What the line changes the price by, before tax: negative for work taken off. */
+  price: string;
+};
+
+/** A change order's priced lines and what it changes the job by. */
 export type ChangeOrderSummary = {
   number: number;
   title: string;
   reason: string;
-  lines: Array<{ description: string; quantity: string; unit: string; price: string }>;
-  /** What the change adds before tax, its tax, and the two together. */
+  lines: ChangeOrderLine[];
+  /**
+   * What the change adds before tax, its tax, and the two together: negative for a credit (work
+   * taken off is worth more than work added).
+   */
   priceBeforeTax: string;
   tax: string;
   total: string;
@@ -334,8 +421,8 @@ export type ChangeOrderView = ChangeOrderSummary & {
   status: ChangeOrderStatus;
   versionNumber: number;
   contentSha256: string;
-  /** Cost of the change's lines (staff only; null for crew leads). */
-  cost: string | null;
+  /** What the change does to the job's cost: Σ extended cost added less Σ taken off. */
+  cost: string;
   sentTo: string | null;
   acceptedByName: string | null;
   acceptedAt: string | null;

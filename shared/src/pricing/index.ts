@@ -19,6 +19,7 @@ export { markupToMarginPct, marginToMarkupPct, marginPercentSchema } from './mar
 export { engineParametersFromPriceBook } from './engine-parameters';
 export { demoPriceBook } from './demo-price-book';
 export { priceLine, roundQuantity, type LineDraft } from './price-line';
+export { reducePricedLines, type LineReduction } from './reduce-lines';
 export { cheapestMaterial, smallestMaterialAtLeast } from './choose-material';
 export { materialLines } from './material-lines';
 export { laborLines, burdenedRate, LABOR_TASK_LABELS } from './labor-lines';

@@ -144,12 +144,24 @@ export type QuoteLinkView = {
   firstViewedAt: string | null;
   createdByName: string;
   /** The quote e-mail's delivery through the outbox: waiting (with retries), sent, or given up. */
-  email: {
-    status: 'pending' | 'sent' | 'failed';
-    attempts: number;
-    lastError: string | null;
-    sentAt: string | null;
-  } | null;
+  email: EmailDeliveryView | null;
+};
+
+/**
+ * One e-mail's delivery through the outbox, as staff see it: `pending` (queued, or waiting to retry
+ * after `lastError`), `sent`, or `failed` (given up; staff may send it again with
+ * `POST /api/outbox/:id/retry`, which answers this shape).
+ */
+export type EmailDeliveryView = {
+  /** The outbox message's id. */
+  id: string;
+  status: 'pending' | 'sent' | 'failed';
+  /** Attempts since it was queued, or since staff last sent it again. */
+  attempts: number;
+  lastError: string | null;
+  sentAt: string | null;
+  /** When staff last sent it again after it gave up; null if never. */
+  retriedAt: string | null;
 };
 
 /** Staff's view of an estimate's quote: links, the acceptance and the deposit. */

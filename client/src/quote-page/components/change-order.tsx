@@ -14,11 +14,33 @@ type ChangeOrderSectionProps = {
   answerHref?: string;
 };
 
-/** What the contractor would like to change: why, the lines, what it adds, and the job before → after. */
+/** A change that takes off more than it adds: the homeowner's price goes down. */
+export function isCredit(change: QuoteChangeOrder): boolean {
+  // Only the sign is read; the figure itself comes from the server.
+  return Number(change.total) < 0;
+}
+
+/** A credit's amount as the homeowner reads it, "1174.58" for a total of "-1174.58". */
+export function creditAmount(change: QuoteChangeOrder): string {
+  return change.total.replace(/^-/, '');
+}
+
+function lineQuantity(line: QuoteChangeOrder['lines'][number]): string {
+  if (line.change === 'added') return `${formatQuantity(line.quantity)} ${line.unit}`;
+  if (line.change === 'removed') return 'Taken off';
+  return `${formatQuantity(line.fromQuantity ?? '')} → ${formatQuantity(line.toQuantity ?? '')} ${line.unit}`;
+}
+
+/**
+ * What the contractor would like to change: why, the lines added and taken off with their prices,
+ * what it adds (or credits, when work comes off), and the job before → after.
+ */
 export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSectionProps) {
   const money = (amount: string) => formatMoney(amount, view.currency);
   const reason = change.reason ? change.reason.trim() : '';
   const declined = change.state === 'declined';
+  const credit = isCredit(change);
+  const onlyAdds = change.lines.every((line) => line.change === 'added');
   return (
     <Section title="Change to your project">
       <Stack gap="md">
@@ -41,7 +63,9 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
         {change.lines.length > 0 && (
           <div className="qp-table-wrap">
             <table className="qp-lines">
-              <caption>What the change adds</caption>
+              <caption>
+                {onlyAdds ? 'What the change adds' : 'What the change adds and takes off'}
+              </caption>
               <thead>
                 <tr>
                   <th scope="col">Item</th>
@@ -53,9 +77,7 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
                 {change.lines.map((line, i) => (
                   <tr key={i}>
                     <td>{line.description}</td>
-                    <td>
-                      {formatQuantity(line.quantity)} {line.unit}
-                    </td>
+                    <td>{lineQuantity(line)}</td>
                     <td>{money(line.price)}</td>
                   </tr>
                 ))}
@@ -64,7 +86,7 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
           </div>
         )}
         <MoneyRows
-          label="What the change costs"
+          label={credit ? 'What the change credits' : 'What the change costs'}
           rows={[
             {
               label: 'Change before tax',
@@ -73,7 +95,7 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
             },
             { label: 'Tax', value: money(change.tax), testId: 'change-tax' },
             {
-              label: 'The change adds, tax included',
+              label: credit ? 'Credit to you, tax included' : 'The change adds, tax included',
               value: money(change.total),
               total: true,
               testId: 'change-total',
@@ -145,8 +167,10 @@ export function ChangeAnsweredPanel({ view, change, focus }: ChangeAnsweredPanel
           </FocusHeading>
           <Text fz="sm">
             Thank you. {view.company.name} will go ahead with it. Your project total is now{' '}
-            <strong>{money(change.newJobTotal)}</strong>, tax included; the change is added to the
-            balance you pay when the work is finished.
+            <strong>{money(change.newJobTotal)}</strong>, tax included;{' '}
+            {isCredit(change)
+              ? 'the credit comes off the balance you pay when the work is finished.'
+              : 'the change is added to the balance you pay when the work is finished.'}
           </Text>
         </Stack>
       </Paper>

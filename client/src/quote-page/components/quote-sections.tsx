@@ -193,13 +193,19 @@ export function DrawingsSection({ view }: { view: QuoteView }) {
   );
 }
 
+/**
+ * The terms the link was sent with, one item per paragraph: plain text from the server (React escapes
+ * it), its line breaks inside a paragraph kept.
+ */
 export function TermsSection({ view }: { view: QuoteView }) {
   if (view.terms.length === 0) return null;
   return (
     <Section title="Terms">
       <List type="ordered" spacing={6} fz="sm">
         {view.terms.map((term, i) => (
-          <List.Item key={i}>{term}</List.Item>
+          <List.Item key={i} style={{ whiteSpace: 'pre-line', overflowWrap: 'anywhere' }}>
+            {term}
+          </List.Item>
         ))}
       </List>
     </Section>

@@ -1,4 +1,9 @@
-import type { BudgetLine, ChangeOrderStatus, ChangeOrderSummary } from '@pondwright/shared';
+import type {
+  BudgetLine,
+  BudgetLineReduction,
+  ChangeOrderStatus,
+  ChangeOrderSummary,
+} from '@pondwright/shared';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import type { CompanyOwned } from '../../common/tenancy/company-owned';
 
@@ -26,6 +31,10 @@ export class ChangeOrder implements CompanyOwned {
   @Column({ name: 'version_id', type: 'uuid' })
   versionId: string;
 
+  /** The version in force it was priced on; null for change orders made before it was kept. */
+  @Column({ name: 'base_version_id', type: 'uuid', nullable: true })
+  baseVersionId: string | null;
+
   /** What the homeowner is shown and accepts (money as decimal strings). */
   @Column({ type: 'jsonb' })
   summary: ChangeOrderSummary;
@@ -33,6 +42,10 @@ export class ChangeOrder implements CompanyOwned {
   /** The lines added to the job's budget when accepted, with their costs. */
   @Column({ name: 'budget_lines', type: 'jsonb' })
   budgetLines: BudgetLine[];
+
+  /** The budget lines it takes work off, with their figures before and after (a credit). */
+  @Column({ name: 'budget_reductions', type: 'jsonb', default: () => `'[]'::jsonb` })
+  budgetReductions: BudgetLineReduction[];
 
   @Column({ type: 'text' })
   status: ChangeOrderStatus;

@@ -14,6 +14,10 @@ export class Company {
   @Column({ name: 'unit_system', type: 'text', default: 'us' })
   unitSystem: CompanyProfile['unitSystem'];
 
+  /** The owner's quote terms; null while the company uses `DEFAULT_QUOTE_TERMS`. */
+  @Column({ name: 'quote_terms', type: 'text', nullable: true })
+  quoteTerms: string | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 }

@@ -9,6 +9,10 @@ import { Jobs1796108400000 } from './1796108400000-jobs';
 import { JobPhotos1796112000000 } from './1796112000000-job-photos';
 import { Invoices1796115600000 } from './1796115600000-invoices';
 import { ChangeOrders1796119200000 } from './1796119200000-change-orders';
+import { ChangeOrderCredits1796122800000 } from './1796122800000-change-order-credits';
+import { OutboxRetries1796126400000 } from './1796126400000-outbox-retries';
+import { QuoteTerms1796130000000 } from './1796130000000-quote-terms';
+import { QuoteTokenFailures1796133600000 } from './1796133600000-quote-token-failures';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -23,4 +27,8 @@ export const migrations = [
   JobPhotos1796112000000,
   Invoices1796115600000,
   ChangeOrders1796119200000,
+  ChangeOrderCredits1796122800000,
+  OutboxRetries1796126400000,
+  QuoteTerms1796130000000,
+  QuoteTokenFailures1796133600000,
 ];

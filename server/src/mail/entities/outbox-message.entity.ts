@@ -60,6 +60,14 @@ export class OutboxMessage {
   @Column({ name: 'sent_at', type: 'timestamptz', nullable: true })
   sentAt: Date | null;
 
+  /** When a person last sent it again after it was given up on; `attempts` restarted from zero then. */
+  @Column({ name: 'retried_at', type: 'timestamptz', nullable: true })
+  retriedAt: Date | null;
+
+  /** Who asked for that (a user of the message's company). */
+  @Column({ name: 'retried_by', type: 'uuid', nullable: true })
+  retriedById: string | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 }

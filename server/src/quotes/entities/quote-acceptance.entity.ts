@@ -26,6 +26,10 @@ export class QuoteAcceptance implements CompanyOwned {
   @Column({ name: 'consent_text', type: 'text' })
   consentText: string;
 
+  /** The terms lines the page listed above the checkbox (null for acceptances recorded before). */
+  @Column({ name: 'terms_shown', type: 'jsonb', nullable: true })
+  termsShown: string[] | null;
+
   @Column({ type: 'text' })
   ip: string;
 

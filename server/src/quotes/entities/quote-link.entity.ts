@@ -52,6 +52,13 @@ export class QuoteLink implements CompanyOwned {
   @Column({ name: 'change_order_id', type: 'uuid', nullable: true })
   changeOrderId: string | null;
 
+  /**
+   * The company's terms as they were when the link was sent, never changed after (a trigger keeps
+   * them). Null on a change-order or invoice link, which shows the terms of the accepted quote.
+   */
+  @Column({ name: 'quote_terms', type: 'text', nullable: true })
+  quoteTerms: string | null;
+
   @Column({ name: 'created_by', type: 'uuid' })
   createdById: string;
 

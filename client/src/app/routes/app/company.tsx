@@ -8,6 +8,7 @@ import { RequireRole } from '@/features/auth/components/require-role';
 import { useCompany } from '@/features/company/api/get-company';
 import { CompanyForm } from '@/features/company/components/company-form';
 import { CompanyLogo } from '@/features/company/components/company-logo';
+import { QuoteTermsForm } from '@/features/company/components/quote-terms-form';
 
 function CompanyPage() {
   const company = useCompany();
@@ -17,7 +18,7 @@ function CompanyPage() {
     <>
       <PageHeader
         title="Company"
-        description="Your company’s name and logo, and the units new takeoffs start in."
+        description="Your company’s name and logo, the units new takeoffs start in, and the terms your quotes carry."
       />
       {company.isPending ? (
         <PageLoader label="Loading the company…" />
@@ -38,6 +39,9 @@ function CompanyPage() {
           </Paper>
           <Paper p="lg">
             <CompanyLogo company={company.data} />
+          </Paper>
+          <Paper p="lg">
+            <QuoteTermsForm />
           </Paper>
         </Stack>
       )}

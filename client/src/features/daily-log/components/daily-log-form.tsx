@@ -7,6 +7,7 @@ import { notifyError, notifySuccess } from '@/lib/notify';
 import { useLogPhotos } from '../hooks/use-log-photos';
 import { useOutbox } from '../hooks/use-outbox';
 import { readDraft, writeDraft, type LogDraft } from '../storage/draft-store';
+import { rememberLoadVolume } from '../storage/load-size-store';
 import { outboxSync } from '../sync/outbox-sync';
 import { photoSync } from '../sync/photo-sync';
 import type { CrewLine } from '../utils/crew-budget';
@@ -26,13 +27,16 @@ export type DailyLogFormProps = {
   initial: LogDraft;
   lines: CrewLine[];
   people: string[];
+  /** The load size disposal in loads starts with (see `defaultLoadVolume`); '' for none. */
+  defaultLoadVolume: string;
   /** The server's copy of this log, when it has one. */
   stored: DailyLogView | null;
   onUseSaved: (stored: DailyLogView) => void;
 };
 
 export function DailyLogForm(props: DailyLogFormProps) {
-  const { userId, jobLabel, draftKey, initial, lines, people, stored, onUseSaved } = props;
+  const { userId, jobLabel, draftKey, initial, lines, people, defaultLoadVolume } = props;
+  const { stored, onUseSaved } = props;
   const { logId, jobId, logDate } = initial;
   const outbox = useOutbox();
   const item = outbox.items.find((queued) => queued.logId === logId) ?? null;
@@ -87,6 +91,12 @@ export function DailyLogForm(props: DailyLogFormProps) {
       notifyError('Some fields need another look before the log can be saved.', 'Not saved yet');
       return;
     }
+    // The size as sent (a decimal point, not the comma a number pad may offer) for the next log.
+    const loadVolume = checked.request.entries
+      .flatMap((entry) => (entry.kind === 'disposal' ? [entry.loadVolumeLooseCubicYards] : []))
+      .filter((size) => size !== undefined)
+      .at(-1);
+    if (loadVolume !== undefined) rememberLoadVolume(userId, loadVolume);
     try {
       outboxSync.save({ logId, jobId, userId, jobLabel, request: checked.request });
     } catch {
@@ -147,7 +157,12 @@ export function DailyLogForm(props: DailyLogFormProps) {
       )}
 
       <PhotoAdderContext.Provider value={photos.add}>
-        <LogEntries form={form} lines={lines} people={people} />
+        <LogEntries
+          form={form}
+          lines={lines}
+          people={people}
+          defaultLoadVolume={defaultLoadVolume}
+        />
       </PhotoAdderContext.Provider>
 
       <LogPhotos queue={photos} />

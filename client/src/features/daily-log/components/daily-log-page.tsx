@@ -9,6 +9,7 @@ import { NetworkError } from '@/lib/api-error';
 import { putLogInCache, useLogJob } from '../api/get-log-job';
 import { draftKey as draftKeyFor, writeDraft } from '../storage/draft-store';
 import { formatTime, isIsoDay } from '../utils/dates';
+import { defaultLoadVolume } from '../utils/default-load-volume';
 import { initialDraft, peopleOn } from '../utils/initial-draft';
 import { logToValues } from '../utils/log-values';
 import { CrewPlan } from './crew-plan';
@@ -136,6 +137,7 @@ function LogEditor({
   onUseSaved,
 }: LogEditorProps) {
   const [initial] = useState(() => initialDraft({ draftKey, userId, jobId, logDate, job: data }));
+  const [loadVolume] = useState(() => defaultLoadVolume(data, userId));
   return (
     <DailyLogForm
       userId={userId}
@@ -144,6 +146,7 @@ function LogEditor({
       initial={initial}
       lines={data?.crewBudget ?? []}
       people={peopleOn(data)}
+      defaultLoadVolume={loadVolume}
       stored={data?.logs.find((log) => log.id === initial.logId) ?? null}
       onUseSaved={onUseSaved}
     />

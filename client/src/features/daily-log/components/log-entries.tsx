@@ -3,7 +3,12 @@ import { IconPlus } from '@tabler/icons-react';
 import { useId } from 'react';
 import { linesFor, type CrewLine } from '../utils/crew-budget';
 import type { Movement } from '../utils/labels';
-import { newHoursRow, newQuantityRow, type QuantityKind } from '../utils/log-values';
+import {
+  lastLoadVolume,
+  newHoursRow,
+  newQuantityRow,
+  type QuantityKind,
+} from '../utils/log-values';
 import { HoursRow } from './hours-row';
 import type { LogForm } from './log-form-types';
 import { LogSection } from './log-section';
@@ -41,19 +46,24 @@ export function LogEntries({
   form,
   lines,
   people,
+  defaultLoadVolume,
 }: {
   form: LogForm;
   lines: CrewLine[];
   people: string[];
+  /** The load size disposal in loads starts with, before the day has one of its own; '' for none. */
+  defaultLoadVolume: string;
 }) {
   const peopleListId = useId();
   const { entries } = form.getValues();
+  const loadVolume = lastLoadVolume(entries) ?? defaultLoadVolume;
   const add = (kind: QuantityKind, movement: Movement | null = null) =>
     form.insertListItem(
       'entries',
       newQuantityRow(kind, movement, {
         fromPlan: linesFor(lines, kind).length > 0,
         unit: DEFAULT_UNIT[kind],
+        loadVolume,
       }),
     );
 
@@ -70,6 +80,7 @@ export function LogEntries({
           number={number}
           entry={entry}
           lines={linesFor(lines, kind)}
+          loadVolume={loadVolume}
         />
       );
     });

@@ -5,7 +5,8 @@ import { MOVEMENT_LABELS, TASK_LABELS, unitLabel } from '../utils/labels';
 function entryText(entry: LogEntry): string {
   if (entry.kind === 'hours')
     return `${entry.person}: ${entry.hours} h, ${TASK_LABELS[entry.task]}`;
-  const amount = `${entry.quantity} ${unitLabel(entry.unit)} ${entry.description}`;
+  const size = entry.loadVolumeLooseCubicYards ? ` of ${entry.loadVolumeLooseCubicYards} yd³` : '';
+  const amount = `${entry.quantity} ${unitLabel(entry.unit)}${size} ${entry.description}`;
   if (entry.kind !== 'material' || !entry.movement) return amount;
   const ticket = entry.ticketNumber ? ` (ticket ${entry.ticketNumber})` : '';
   return `${MOVEMENT_LABELS[entry.movement]}: ${amount}${ticket}`;

@@ -1,7 +1,7 @@
 import { Group, NativeSelect, Paper, SegmentedControl, Stack, TextInput } from '@mantine/core';
 import type { CrewLine } from '../utils/crew-budget';
 import { MOVEMENT_LABELS, unitLabel, type Movement } from '../utils/labels';
-import type { QuantityKind, QuantityValues } from '../utils/log-values';
+import { countsLoads, type QuantityKind, type QuantityValues } from '../utils/log-values';
 import { DeliveryFields } from './delivery-fields';
 import type { LogForm } from './log-form-types';
 import { RemoveRowButton } from './remove-row-button';
@@ -27,23 +27,31 @@ type QuantityRowProps = {
   entry: QuantityValues;
   /** The crew budget lines of this row's kind. */
   lines: CrewLine[];
+  /** The load size a disposal row switched to loads starts with; '' for none. */
+  loadVolume: string;
 };
 
-export function QuantityRow({ form, index, number, entry, lines }: QuantityRowProps) {
+export function QuantityRow({ form, index, number, entry, lines, loadVolume }: QuantityRowProps) {
   const path = `entries.${index}` as const;
   const names = NAMES[entry.kind];
 
+  // A row that comes to count loads starts with the size the crew used last; one it had is kept.
+  const withUnit = (unit: string): QuantityValues => {
+    const size = entry.loadVolumeLooseCubicYards ?? '';
+    const sized = countsLoads({ kind: entry.kind, unit }) && size === '' ? loadVolume : size;
+    return { ...entry, unit, loadVolumeLooseCubicYards: sized };
+  };
   const pick = (value: string) => {
     const line = lines.find((candidate) => candidate.id === value);
     form.replaceListItem('entries', index, {
-      ...entry,
+      ...withUnit(line?.unit ?? entry.unit),
       lineId: line?.id ?? (value === OTHER ? null : ''),
       code: line?.code ?? null,
       description: line?.description ?? '',
-      unit: line?.unit ?? entry.unit,
     });
   };
   const description = form.getInputProps(`${path}.description`);
+  const unit = form.getInputProps(`${path}.unit`);
 
   return (
     <Paper withBorder p="sm" role="group" aria-label={`${names.row} ${number}`}>
@@ -81,7 +89,13 @@ export function QuantityRow({ form, index, number, entry, lines }: QuantityRowPr
         )}
         <Group gap="xs" align="flex-start" wrap="nowrap">
           <TextInput
-            label={entry.kind === 'equipment' && entry.unit === 'day' ? 'Days' : 'Quantity'}
+            label={
+              entry.kind === 'equipment' && entry.unit === 'day'
+                ? 'Days'
+                : countsLoads(entry)
+                  ? 'Loads'
+                  : 'Quantity'
+            }
             size="md"
             inputMode="decimal"
             style={{ flex: 1 }}
@@ -93,7 +107,10 @@ export function QuantityRow({ form, index, number, entry, lines }: QuantityRowPr
               size="md"
               w={110}
               data={disposalUnits(entry)}
-              {...form.getInputProps(`${path}.unit`)}
+              {...unit}
+              onChange={(event) =>
+                form.replaceListItem('entries', index, withUnit(event.currentTarget.value))
+              }
             />
           ) : (
             <TextInput
@@ -109,6 +126,17 @@ export function QuantityRow({ form, index, number, entry, lines }: QuantityRowPr
             onClick={() => form.removeListItem('entries', index)}
           />
         </Group>
+        {countsLoads(entry) && (
+          <TextInput
+            label="Load size (loose yd³)"
+            description="The truck’s or container’s capacity, such as 10 for a tandem dump truck or 6 for a skid-steer trailer. Each load counts as full, even when it was not."
+            placeholder="10"
+            size="md"
+            inputMode="decimal"
+            {...form.getInputProps(`${path}.loadVolumeLooseCubicYards`)}
+            value={entry.loadVolumeLooseCubicYards ?? ''}
+          />
+        )}
         {entry.kind === 'material' && entry.movement === 'delivered' && (
           <DeliveryFields form={form} path={path} ticketNumber={entry.ticketNumber} />
         )}

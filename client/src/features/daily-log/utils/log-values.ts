@@ -1,5 +1,6 @@
 import {
   hoursEntrySchema,
+  isLoadUnit,
   quantityEntrySchema,
   saveDailyLogRequestSchema,
   type DailyLogView,
@@ -36,6 +37,11 @@ export type QuantityValues = {
   unitCost: string;
   supplier: string;
   ticketNumber: string;
+  /**
+   * Disposal in loads: each load's nominal capacity, loose yd³, as typed. Drafts kept on the phone
+   * before the field existed lack it.
+   */
+  loadVolumeLooseCubicYards?: string;
 };
 
 export type EntryValues = HoursValues | QuantityValues;
@@ -48,11 +54,18 @@ export function newHoursRow(person = ''): HoursValues {
   return { id: newId(), kind: 'hours', person, task: '', hours: '' };
 }
 
-/** A new row picks from the plan when the plan has lines of its kind, else is typed in. */
+/** Disposal counted in loads, which needs each load's size. */
+export const countsLoads = (entry: Pick<QuantityValues, 'kind' | 'unit'>) =>
+  entry.kind === 'disposal' && isLoadUnit(entry.unit);
+
+/**
+ * A new row picks from the plan when the plan has lines of its kind, else is typed in. Disposal in
+ * loads starts with `loadVolume`, the load size the crew used last.
+ */
 export function newQuantityRow(
   kind: QuantityKind,
   movement: Movement | null,
-  { fromPlan, unit }: { fromPlan: boolean; unit: string },
+  { fromPlan, unit, loadVolume = '' }: { fromPlan: boolean; unit: string; loadVolume?: string },
 ): QuantityValues {
   return {
     id: newId(),
@@ -66,6 +79,7 @@ export function newQuantityRow(
     unitCost: '',
     supplier: '',
     ticketNumber: '',
+    loadVolumeLooseCubicYards: countsLoads({ kind, unit }) ? loadVolume : '',
   };
 }
 
@@ -96,6 +110,10 @@ function toEntry(entry: EntryValues): unknown {
     unitCost: delivery && entry.unitCost.trim() ? decimalText(entry.unitCost) : null,
     supplier: delivery ? orNull(entry.supplier) : null,
     ticketNumber: delivery ? orNull(entry.ticketNumber) : null,
+    // Sent even when blank, so the shared rules ask for it; other rows never carry one.
+    loadVolumeLooseCubicYards: countsLoads(entry)
+      ? decimalText(entry.loadVolumeLooseCubicYards ?? '')
+      : undefined,
   };
 }
 
@@ -149,7 +167,17 @@ export function entryToValues(entry: LogEntry, lines: CrewLine[]): EntryValues {
     unitCost: entry.unitCost ?? '',
     supplier: entry.supplier ?? '',
     ticketNumber: entry.ticketNumber ?? '',
+    loadVolumeLooseCubicYards: entry.loadVolumeLooseCubicYards ?? '',
   };
+}
+
+/** The load size of the day's last disposal row in loads that has one. */
+export function lastLoadVolume(entries: ReadonlyArray<EntryValues>): string | null {
+  const sizes = entries.flatMap((entry) => {
+    const size = entry.kind === 'hours' ? '' : (entry.loadVolumeLooseCubicYards?.trim() ?? '');
+    return entry.kind !== 'hours' && countsLoads(entry) && size !== '' ? [size] : [];
+  });
+  return sizes.at(-1) ?? null;
 }
 
 export function logToValues(

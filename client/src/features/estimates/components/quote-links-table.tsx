@@ -1,8 +1,10 @@
-import { Badge, Button, Table, Text, VisuallyHidden } from '@mantine/core';
+import { Badge, Button, Stack, Table, Text, VisuallyHidden } from '@mantine/core';
 import type { QuoteLinkView } from '@pondwright/shared';
+import { IconSend } from '@tabler/icons-react';
 import { useState } from 'react';
 import { ConfirmDialog } from '@/components/confirm-dialog';
-import { notifySuccess } from '@/lib/notify';
+import { notifyApiError, notifySuccess } from '@/lib/notify';
+import { useRetryQuoteEmail } from '../api/retry-quote-email';
 import { useRevokeQuoteLink } from '../api/revoke-quote-link';
 import { formatDateTime } from './quote-format';
 
@@ -67,7 +69,11 @@ export function QuoteLinksTable({ estimateId, links, readOnly = false }: QuoteLi
                     <Text size="xs" c="dimmed">
                       by {link.createdByName}
                     </Text>
-                    <EmailDelivery email={link.email} />
+                    <EmailDelivery
+                      estimateId={estimateId}
+                      link={link}
+                      canSendAgain={!readOnly && link.status === 'active'}
+                    />
                   </Table.Td>
                   <Table.Td>{formatDateTime(link.firstViewedAt) || 'Not yet'}</Table.Td>
                   <Table.Td>
@@ -124,8 +130,19 @@ export function QuoteLinksTable({ estimateId, links, readOnly = false }: QuoteLi
   );
 }
 
-/** Whether the quote e-mail has left: the outbox retries through a mail-server outage. */
-function EmailDelivery({ email }: { email: QuoteLinkView['email'] }) {
+type EmailDeliveryProps = {
+  estimateId: string;
+  link: QuoteLinkView;
+  /** Only a link the homeowner can still use is worth e-mailing again. */
+  canSendAgain: boolean;
+};
+
+/**
+ * Whether the quote e-mail has left: the outbox retries through a mail-server outage, and once it has
+ * given up, staff see why and may send it again.
+ */
+function EmailDelivery({ estimateId, link, canSendAgain }: EmailDeliveryProps) {
+  const { email } = link;
   if (!email) return null;
   if (email.status === 'sent') {
     return (
@@ -136,14 +153,64 @@ function EmailDelivery({ email }: { email: QuoteLinkView['email'] }) {
   }
   if (email.status === 'failed') {
     return (
-      <Text size="xs" c="red.7" title={email.lastError ?? undefined}>
-        E-mail not delivered after {email.attempts} tries: check the address, then resend
-      </Text>
+      <Stack gap={2} align="flex-start">
+        <Text size="xs" c="red.7">
+          E-mail not delivered after {email.attempts} tries
+        </Text>
+        {email.lastError && (
+          <Text size="xs" c="dimmed" lineClamp={2} title={email.lastError}>
+            Last error: {email.lastError}
+          </Text>
+        )}
+        {canSendAgain ? (
+          <SendAgainButton estimateId={estimateId} emailId={email.id} to={link.recipientEmail} />
+        ) : (
+          <Text size="xs" c="dimmed">
+            Check the address, then resend the quote
+          </Text>
+        )}
+      </Stack>
     );
   }
   return (
     <Text size="xs" c="clay.7" title={email.lastError ?? undefined}>
-      {email.attempts === 0 ? 'E-mail queued' : `E-mail retrying (tried ${email.attempts}×)`}
+      {email.attempts > 0
+        ? `E-mail retrying (tried ${email.attempts}×)`
+        : email.retriedAt
+          ? 'E-mail queued again'
+          : 'E-mail queued'}
     </Text>
+  );
+}
+
+function SendAgainButton({
+  estimateId,
+  emailId,
+  to,
+}: {
+  estimateId: string;
+  emailId: string;
+  to: string;
+}) {
+  const retry = useRetryQuoteEmail();
+  return (
+    <Button
+      size="compact-xs"
+      variant="light"
+      leftSection={<IconSend size={12} aria-hidden />}
+      aria-label={`Send the e-mail to ${to} again`}
+      loading={retry.isPending}
+      onClick={() =>
+        retry.mutate(
+          { estimateId, emailId },
+          {
+            onSuccess: () => notifySuccess(`The e-mail to ${to} is queued to be sent again.`),
+            onError: (error) => notifyApiError(error, 'The e-mail was not sent again'),
+          },
+        )
+      }
+    >
+      Send again
+    </Button>
   );
 }

@@ -7,7 +7,12 @@ import { renderWithProviders } from '@/testing/render';
 import { useEstimate } from '../api/get-estimate';
 import { useEstimateEditor } from '../hooks/use-estimate-editor';
 import { buildEstimate, withRevision } from '../testing/build-estimate';
-import { buildAcceptedQuote, buildQuoteLink, buildQuoteStatus } from '../testing/build-quote';
+import {
+  buildAcceptedQuote,
+  buildEmailDelivery,
+  buildQuoteLink,
+  buildQuoteStatus,
+} from '../testing/build-quote';
 import { EstimateActions } from './estimate-actions';
 import { EstimateEditNotes } from './estimate-edit-notes';
 import { EstimateHeaderStatus } from './estimate-header-status';
@@ -38,6 +43,7 @@ const routes = {
   revoke: `POST /api/estimates/${ID}/quote-links/link-1/revoke`,
   save: `PUT /api/estimates/${ID}/draft`,
   pdf: `GET /api/estimates/${ID}/quote.pdf`,
+  retryEmail: 'POST /api/outbox/mail-1/retry',
 };
 
 /** jsdom has no object URLs; the test's stand-ins are removed again after each test. */
@@ -223,23 +229,24 @@ describe('The quote’s links', () => {
         buildQuoteStatus({
           links: [
             buildQuoteLink({
-              email: {
+              email: buildEmailDelivery({
                 status: 'pending',
                 attempts: 2,
                 lastError: 'connect ECONNREFUSED',
                 sentAt: null,
-              },
+              }),
             }),
             buildQuoteLink({
               id: 'link-0',
               status: 'revoked',
               createdAt: '2026-12-02T09:00:00.000Z',
-              email: {
+              email: buildEmailDelivery({
+                id: 'mail-0',
                 status: 'failed',
                 attempts: 10,
                 lastError: '550 mailbox unavailable',
                 sentAt: null,
-              },
+              }),
             }),
           ],
         }),
@@ -250,10 +257,101 @@ describe('The quote’s links', () => {
 
     const links = await screen.findByRole('table', { name: 'Links sent' });
     expect(within(links).getByText('E-mail retrying (tried 2×)')).toBeInTheDocument();
-    expect(within(links).getByText(/E-mail not delivered after 10 tries/)).toHaveAttribute(
-      'title',
-      '550 mailbox unavailable',
+    expect(within(links).getByText('E-mail not delivered after 10 tries')).toBeInTheDocument();
+    expect(within(links).getByText('Last error: 550 mailbox unavailable')).toBeInTheDocument();
+    // The link was withdrawn: e-mailing it again would only deliver a dead link.
+    expect(within(links).getByText('Check the address, then resend the quote')).toBeInTheDocument();
+    expect(within(links).queryByRole('button', { name: /again/ })).not.toBeInTheDocument();
+  });
+
+  it('sends a given-up e-mail again and shows it queued', async () => {
+    setAccessToken('t');
+    const gaveUp = buildEmailDelivery({
+      status: 'failed',
+      attempts: 10,
+      lastError: '421 try again later',
+      sentAt: null,
+    });
+    const queued = buildEmailDelivery({
+      status: 'pending',
+      attempts: 0,
+      lastError: '421 try again later',
+      sentAt: null,
+      retriedAt: '2026-12-04T08:00:00.000Z',
+    });
+    const server = mockApi({
+      [routes.estimate]: json(at('sent')),
+      [routes.quote]: [
+        json(buildQuoteStatus({ links: [buildQuoteLink({ email: gaveUp })] })),
+        json(buildQuoteStatus({ links: [buildQuoteLink({ email: queued })] })),
+      ],
+      [routes.customer]: json(customer),
+      [routes.retryEmail]: json(queued),
+    });
+    const { user } = renderWithProviders(<Builder />);
+
+    const links = await screen.findByRole('table', { name: 'Links sent' });
+    expect(within(links).getByText('Last error: 421 try again later')).toBeInTheDocument();
+    await user.click(
+      within(links).getByRole('button', { name: 'Send the e-mail to bram@example.test again' }),
     );
+
+    expect(
+      await screen.findByText('The e-mail to bram@example.test is queued to be sent again.'),
+    ).toBeInTheDocument();
+    expect(server.callsTo(routes.retryEmail)).toHaveLength(1);
+    expect(server.callsTo(routes.retryEmail)[0]?.headers.authorization).toBe('Bearer t');
+    expect(await within(links).findByText('E-mail queued again')).toBeInTheDocument();
+    expect(within(links).queryByRole('button', { name: /again/ })).not.toBeInTheDocument();
+    expect(server.callsTo(routes.quote)).toHaveLength(2);
+  });
+
+  it('says so when the e-mail cannot be sent again, and shows where it stands', async () => {
+    setAccessToken('t');
+    const server = mockApi({
+      [routes.estimate]: json(at('sent')),
+      [routes.quote]: [
+        json(
+          buildQuoteStatus({
+            links: [
+              buildQuoteLink({
+                email: buildEmailDelivery({
+                  status: 'failed',
+                  attempts: 10,
+                  lastError: '550 mailbox unavailable',
+                  sentAt: null,
+                }),
+              }),
+            ],
+          }),
+        ),
+        // Someone else sent it again meanwhile, and it went.
+        json(buildQuoteStatus({ links: [buildQuoteLink()] })),
+      ],
+      [routes.customer]: json(customer),
+      [routes.retryEmail]: json(
+        {
+          statusCode: 409,
+          error: 'Conflict',
+          code: 'MAIL_NOT_FAILED',
+          message: 'This e-mail was delivered; there is nothing to send again.',
+        },
+        409,
+      ),
+    });
+    const { user } = renderWithProviders(<Builder />);
+
+    const links = await screen.findByRole('table', { name: 'Links sent' });
+    await user.click(
+      within(links).getByRole('button', { name: 'Send the e-mail to bram@example.test again' }),
+    );
+
+    expect(
+      await screen.findByText('This e-mail was delivered; there is nothing to send again.'),
+    ).toBeInTheDocument();
+    expect(screen.getByText('The e-mail was not sent again')).toBeInTheDocument();
+    expect(await within(links).findByText(/^E-mail delivered/)).toBeInTheDocument();
+    expect(server.callsTo(routes.retryEmail)).toHaveLength(1);
   });
 
   it('downloads the PDF with the bearer token', async () => {

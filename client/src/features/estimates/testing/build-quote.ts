@@ -1,4 +1,17 @@
-import type { EstimateQuoteStatus, QuoteLinkView } from '@pondwright/shared';
+import type { EmailDeliveryView, EstimateQuoteStatus, QuoteLinkView } from '@pondwright/shared';
+
+/** A quote e-mail delivered on the first try unless told otherwise. */
+export function buildEmailDelivery(overrides: Partial<EmailDeliveryView> = {}): EmailDeliveryView {
+  return {
+    id: 'mail-1',
+    status: 'sent',
+    attempts: 1,
+    lastError: null,
+    sentAt: '2026-12-03T09:00:05.000Z',
+    retriedAt: null,
+    ...overrides,
+  };
+}
 
 export function buildQuoteLink(overrides: Partial<QuoteLinkView> = {}): QuoteLinkView {
   return {
@@ -10,7 +23,7 @@ export function buildQuoteLink(overrides: Partial<QuoteLinkView> = {}): QuoteLin
     expiresAt: '2027-01-02T09:00:00.000Z',
     revokedAt: null,
     firstViewedAt: null,
-    email: { status: 'sent', attempts: 1, lastError: null, sentAt: '2026-12-03T09:00:05.000Z' },
+    email: buildEmailDelivery(),
     createdByName: 'Olive Owner',
     ...overrides,
   };

@@ -1,12 +1,17 @@
 import { Alert, Button, Group, Modal, Stack, Text, Textarea, TextInput } from '@mantine/core';
-import { createChangeOrderRequestSchema, type ChangeOrderView } from '@pondwright/shared';
+import {
+  createChangeOrderRequestSchema,
+  type BudgetLine,
+  type ChangeOrderView,
+} from '@pondwright/shared';
 import { IconCalculator, IconSend } from '@tabler/icons-react';
 import { useState } from 'react';
 import { ApiError } from '@/lib/api-error';
 import { useSchemaForm } from '@/lib/form';
 import { notifySuccess } from '@/lib/notify';
 import { useCreateChangeOrder } from '../api/create-change-order';
-import { blankChangeLine, ChangeOrderLinesEditor } from './change-order-lines-editor';
+import { ChangeOrderLinesEditor } from './change-order-lines-editor';
+import { ChangeOrderReductionsEditor } from './change-order-reductions-editor';
 import { ChangeOrderSummary } from './change-order-summary';
 import { SendError } from './send-link-modal';
 
@@ -14,23 +19,36 @@ type ChangeOrderModalProps = {
   opened: boolean;
   jobId: string;
   currency: string;
+  /** The job's budget lines: the work a change can take off. */
+  budgetLines: BudgetLine[];
   onClose: () => void;
   /** The priced change is to go to the homeowner now. */
   onSend: (order: ChangeOrderView) => void;
 };
 
+function ListError({ error }: { error: unknown }) {
+  return typeof error === 'string' ? (
+    <Text size="sm" c="red" role="alert">
+      {error}
+    </Text>
+  ) : null;
+}
+
 function ChangeOrderForm({
   jobId,
+  budgetLines,
   onPriced,
 }: {
   jobId: string;
+  budgetLines: BudgetLine[];
   onPriced: (order: ChangeOrderView) => void;
 }) {
   const create = useCreateChangeOrder();
   const form = useSchemaForm(createChangeOrderRequestSchema, {
     title: '',
     reason: '',
-    lines: [blankChangeLine()],
+    lines: [],
+    reductions: [],
   });
 
   const submit = form.onSubmit((request) =>
@@ -57,8 +75,8 @@ function ChangeOrderForm({
     <form onSubmit={submit} noValidate aria-label="New change order">
       <Stack gap="md">
         <Text size="sm">
-          Priced with the price book of the version the homeowner accepted. The job’s budget grows
-          only once they accept the change.
+          Add new work, take work off the job (a credit), or both. Priced with the price book of the
+          version the homeowner accepted; the job’s budget changes only once they accept.
         </Text>
         <TextInput
           label="Title"
@@ -77,6 +95,9 @@ function ChangeOrderForm({
           {...form.getInputProps('reason')}
         />
         <ChangeOrderLinesEditor form={form} />
+        <ChangeOrderReductionsEditor form={form} budgetLines={budgetLines} />
+        <ListError error={form.errors.lines} />
+        <ListError error={form.errors.reductions} />
         {create.error && <SendError error={create.error} />}
         <Group justify="flex-end">
           <Button
@@ -121,11 +142,15 @@ function PricedChange({
   );
 }
 
-/** A new change order: title, reason and lines; once priced, its figures and a way to send it. */
+/**
+ * A new change order: title, reason, new lines and work taken off; once priced, its figures and a
+ * way to send it.
+ */
 export function ChangeOrderModal({
   opened,
   jobId,
   currency,
+  budgetLines,
   onClose,
   onSend,
 }: ChangeOrderModalProps) {
@@ -155,7 +180,7 @@ export function ChangeOrderModal({
             }}
           />
         ) : (
-          <ChangeOrderForm jobId={jobId} onPriced={setPriced} />
+          <ChangeOrderForm jobId={jobId} budgetLines={budgetLines} onPriced={setPriced} />
         ))}
     </Modal>
   );

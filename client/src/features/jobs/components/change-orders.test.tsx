@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { setAccessToken } from '@/lib/api-client';
-import { json, mockApi } from '@/testing/mock-api';
+import { apiError, json, mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
 import { buildJob } from '../testing/build-job';
 import { buildChangeOrder } from '../testing/build-job-extras';
@@ -44,14 +44,18 @@ describe('Change orders', () => {
     await user.click(within(dialog).getByRole('button', { name: 'Price the change' }));
 
     expect(await within(dialog).findByText('Name the change')).toBeInTheDocument();
-    expect(within(dialog).getByText('Describe the line')).toBeInTheDocument();
+    expect(within(dialog).getByText('Add a line or take work off')).toBeInTheDocument();
+
+    await user.click(within(dialog).getByRole('button', { name: 'Add a line' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Price the change' }));
+    expect(await within(dialog).findByText('Describe the line')).toBeInTheDocument();
     expect(within(dialog).getByText('Enter a unit cost such as 12.50')).toBeInTheDocument();
     expect(server.callsTo(routes.create)).toHaveLength(0);
 
     // Removing the only line leaves nothing to price.
     await user.click(within(dialog).getByRole('button', { name: 'Remove line 1' }));
     await user.click(within(dialog).getByRole('button', { name: 'Price the change' }));
-    expect(await within(dialog).findByText('Add at least one line')).toBeInTheDocument();
+    expect(await within(dialog).findByText('Add a line or take work off')).toBeInTheDocument();
 
     await user.click(within(dialog).getByRole('button', { name: 'Add a line' }));
     await user.type(within(dialog).getByLabelText(/^Title/), 'Second waterfall');
@@ -101,6 +105,7 @@ describe('Change orders', () => {
           kind: 'base',
         },
       ],
+      reductions: [],
     });
     expect(body.lines[0]?.id).not.toBe(body.lines[1]?.id);
 
@@ -114,6 +119,154 @@ describe('Change orders', () => {
     const list = await screen.findByRole('table', { name: 'Change orders' });
     expect(within(list).getByText('Second waterfall')).toBeInTheDocument();
     expect(within(list).getByText('Ready to send')).toBeInTheDocument();
+  });
+
+  it('takes work off the job as a credit and shows each line, the net credit and the new total', async () => {
+    setAccessToken('t');
+    // The liner comes off: 480 sq ft, price 510.00, taxed at 7.25 % = 36.98 (the job's only tax).
+    // Excavation 16 h → 10 h: 10 × 30.08 = 300.80 cost, × 1.40 = 421.12 price (was 673.79).
+    const credit = buildChangeOrder({
+      title: 'No liner, less digging',
+      reason: 'The homeowner supplies the liner.',
+      lines: [
+        {
+          change: 'removed',
+          description: 'EPDM liner, 45 mil',
+          quantity: '480',
+          unit: 'sq ft',
+          fromQuantity: '480',
+          toQuantity: '0',
+          price: '-510.00',
+        },
+        {
+          change: 'reduced',
+          description: 'Excavation',
+          quantity: '6',
+          unit: 'h',
+          fromQuantity: '16',
+          toQuantity: '10',
+          price: '-252.67',
+        },
+      ],
+      // −510.00 − 252.67 = −762.67 before tax; −36.98 tax; −799.65 in all: 1220.77 → 421.12.
+      priceBeforeTax: '-762.67',
+      tax: '-36.98',
+      total: '-799.65',
+      newJobTotal: '421.12',
+      // −408.00 − (481.28 − 300.80).
+      cost: '-588.48',
+    });
+    const server = mockApi({
+      [routes.job]: json(job),
+      [routes.list]: [json([]), json([credit])],
+      [routes.create]: [
+        apiError(400, 'Enter less than 16 h: a credit takes work off (add new work as a line)', [
+          {
+            field: 'reductions.1.newQuantity',
+            message: 'Enter less than 16 h: a credit takes work off (add new work as a line)',
+          },
+        ]),
+        json(credit, 201),
+      ],
+    });
+    const { user } = await openChanges();
+
+    await user.click(await screen.findByRole('button', { name: 'New change order' }));
+    const dialog = await screen.findByRole('dialog', { name: 'New change order' });
+    await user.type(within(dialog).getByLabelText(/^Title/), 'No liner, less digging');
+    await user.type(within(dialog).getByLabelText(/^Reason/), 'The homeowner supplies the liner.');
+    await user.click(within(dialog).getByRole('button', { name: 'Take off work' }));
+    await user.click(within(dialog).getByRole('combobox', { name: 'Line of reduction 1' }));
+    await user.click(await screen.findByRole('option', { name: 'EPDM liner, 45 mil (480 sq ft)' }));
+    expect(within(dialog).getByLabelText('Quantity kept of reduction 1')).toHaveValue('0');
+    await user.click(within(dialog).getByRole('button', { name: 'Take off work' }));
+    await user.click(within(dialog).getByRole('combobox', { name: 'Line of reduction 2' }));
+    // A line already taken off is not offered twice.
+    expect(screen.queryByRole('option', { name: 'EPDM liner, 45 mil (480 sq ft)' })).toBeNull();
+    await user.click(await screen.findByRole('option', { name: 'Excavation (16 h)' }));
+    const kept = within(dialog).getByLabelText('Quantity kept of reduction 2');
+    await user.clear(kept);
+    await user.type(kept, '16');
+    await user.click(within(dialog).getByRole('button', { name: 'Price the change' }));
+
+    // The server says what is wrong with the line, beside it.
+    expect(
+      await within(dialog).findAllByText(
+        'Enter less than 16 h: a credit takes work off (add new work as a line)',
+      ),
+    ).not.toHaveLength(0);
+    expect(kept).toHaveAttribute('aria-invalid', 'true');
+    await user.clear(kept);
+    await user.type(kept, '10');
+    await user.click(within(dialog).getByRole('button', { name: 'Price the change' }));
+
+    await waitFor(() => expect(server.callsTo(routes.create)).toHaveLength(2));
+    expect(server.callsTo(routes.create)[1]?.body).toEqual({
+      title: 'No liner, less digging',
+      reason: 'The homeowner supplies the liner.',
+      lines: [],
+      reductions: [
+        { lineId: 'liner', newQuantity: '0' },
+        { lineId: 'labor:excavation', newQuantity: '10' },
+      ],
+    });
+
+    const priced = await screen.findByRole('dialog', { name: 'The change is priced' });
+    const lines = within(priced).getByRole('table', { name: 'Lines of change order 1' });
+    const rows = within(lines)
+      .getAllByRole('row')
+      .slice(1)
+      .map((row) => [...row.querySelectorAll('td')].map((cell) => cell.textContent));
+    expect(rows).toEqual([
+      ['EPDM liner, 45 mil', 'Removed', '480 → 0 sq ft', '-$510.00'],
+      ['Excavation', 'Reduced', '16 → 10 h', '-$252.67'],
+    ]);
+    expect(within(priced).getByLabelText('Before tax')).toHaveTextContent('-$762.67');
+    expect(within(priced).getByLabelText('Tax')).toHaveTextContent('-$36.98');
+    expect(within(priced).getByLabelText('Credit to the homeowner')).toHaveTextContent('-$799.65');
+    expect(within(priced).getByLabelText('Cost change')).toHaveTextContent('-$588.48');
+    expect(within(priced).queryByLabelText('The change adds')).toBeNull();
+    expect(within(priced).getByLabelText('Job total')).toHaveTextContent(
+      'Job total $1,220.77 → $421.12',
+    );
+
+    await user.click(within(priced).getByRole('button', { name: 'Send later' }));
+    const list = await screen.findByRole('table', { name: 'Change orders' });
+    const row = within(list).getByText('No liner, less digging').closest('tr')!;
+    expect(within(row).getByText('-$799.65')).toBeInTheDocument();
+    expect(within(row).getByText('Credit')).toBeInTheDocument();
+    expect(within(row).getByText('$1,220.77 → $421.12')).toBeInTheDocument();
+    expect(
+      within(row).getByText('EPDM liner, 45 mil (removed) · Excavation (16 → 10 h)'),
+    ).toBeInTheDocument();
+  });
+
+  it('shows why a credit is refused when it goes below what the homeowner has paid', async () => {
+    setAccessToken('t');
+    const message =
+      "This credit would bring the job's total to $121.12, below the $366.23 the homeowner has already paid. Take off at most $854.54, tax included.";
+    mockApi({
+      [routes.job]: json(job),
+      [routes.list]: json([]),
+      [routes.create]: json(
+        { statusCode: 409, error: 'Conflict', message, code: 'CREDIT_EXCEEDS_PAID' },
+        409,
+      ),
+    });
+    const { user } = await openChanges();
+
+    await user.click(await screen.findByRole('button', { name: 'New change order' }));
+    const dialog = await screen.findByRole('dialog', { name: 'New change order' });
+    await user.type(within(dialog).getByLabelText(/^Title/), 'Cancel everything');
+    await user.click(within(dialog).getByRole('button', { name: 'Take off work' }));
+    await user.click(within(dialog).getByRole('combobox', { name: 'Line of reduction 1' }));
+    await user.click(await screen.findByRole('option', { name: 'EPDM liner, 45 mil (480 sq ft)' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Price the change' }));
+
+    const alert = await within(dialog).findByRole('alert');
+    expect(alert).toHaveTextContent('The credit is more than the homeowner still owes');
+    expect(alert).toHaveTextContent(message);
+    expect(screen.queryByRole('dialog', { name: 'The change is priced' })).toBeNull();
   });
 
   it('sends a change to the homeowner’s address by default, lists it as sent, and sends it again', async () => {

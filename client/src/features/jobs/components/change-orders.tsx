@@ -9,6 +9,7 @@ import { notifySuccess } from '@/lib/notify';
 import { useChangeOrders } from '../api/get-change-orders';
 import { jobKeys } from '../api/get-jobs';
 import { useSendChangeOrder } from '../api/send-change-order';
+import { isCredit, lineSummaryText } from '../utils/change-order-text';
 import { CHANGE_ORDER_STATUS_COLORS, CHANGE_ORDER_STATUS_LABELS } from '../utils/labels';
 import { ChangeOrderModal } from './change-order-modal';
 import { SendLinkModal } from './send-link-modal';
@@ -80,7 +81,7 @@ function ChangeOrdersTable({
             <Table.Th>#</Table.Th>
             <Table.Th>Change</Table.Th>
             <Table.Th>Status</Table.Th>
-            <Table.Th ta="right">Adds</Table.Th>
+            <Table.Th ta="right">Net change</Table.Th>
             <Table.Th>Job total</Table.Th>
             <Table.Th ta="right">Cost</Table.Th>
             <Table.Th>Accepted by</Table.Th>
@@ -101,7 +102,7 @@ function ChangeOrdersTable({
                   </Text>
                 )}
                 <Text size="xs" c="dimmed">
-                  {order.lines.map((l) => `${l.description} (${l.quantity} ${l.unit})`).join(' · ')}
+                  {order.lines.map(lineSummaryText).join(' · ')}
                 </Text>
               </Table.Td>
               <Table.Td>
@@ -109,14 +110,21 @@ function ChangeOrdersTable({
                   {CHANGE_ORDER_STATUS_LABELS[order.status]}
                 </Badge>
               </Table.Td>
-              <Table.Td ta="right" ff="monospace">
-                {money(order.total)}
+              <Table.Td ta="right" style={{ whiteSpace: 'nowrap' }}>
+                <Text span size="sm" ff="monospace">
+                  {money(order.total)}
+                </Text>
+                {isCredit(order) && (
+                  <Badge ml={6} size="sm" variant="light" color="clay" tt="none">
+                    Credit
+                  </Badge>
+                )}
               </Table.Td>
               <Table.Td ff="monospace" style={{ whiteSpace: 'nowrap' }}>
                 {money(order.previousJobTotal)} → {money(order.newJobTotal)}
               </Table.Td>
               <Table.Td ta="right" ff="monospace">
-                {order.cost === null ? '' : money(order.cost)}
+                {money(order.cost)}
               </Table.Td>
               <Table.Td>
                 <Answer order={order} />
@@ -141,7 +149,10 @@ function ChangeOrdersTable({
   );
 }
 
-/** Scope changes after the quote: priced, sent to the homeowner, and added to the budget on yes. */
+/**
+ * Scope changes after the quote, work added or taken off: priced, sent to the homeowner, and applied
+ * to the budget on yes.
+ */
 export function ChangeOrders({ job }: { job: Job }) {
   const orders = useChangeOrders(job.id);
   const send = useSendChangeOrder();
@@ -165,8 +176,8 @@ export function ChangeOrders({ job }: { job: Job }) {
             Change orders
           </Title>
           <Text size="sm" c="dimmed">
-            Work the homeowner asks for after accepting the quote. Each change is priced, sent for
-            them to accept, and joins the budget once they do.
+            Work the homeowner adds or drops after accepting the quote. Each change is priced, sent
+            for them to accept, and changes the budget once they do; work taken off is a credit.
           </Text>
         </Stack>
         <Group gap="xs">
@@ -209,6 +220,7 @@ export function ChangeOrders({ job }: { job: Job }) {
         opened={creating}
         jobId={job.id}
         currency={currency}
+        budgetLines={job.budget?.lines ?? []}
         onClose={() => setCreating(false)}
         onSend={(order) => {
           setCreating(false);

@@ -116,6 +116,45 @@ describe('Job cost report', () => {
     ]);
   });
 
+  it('shows disposal logged in loads in the budget’s yd³, with the loads counted', async () => {
+    setAccessToken('t');
+    const note =
+      "Haul-off: 3 loads logged count as 30 cu yd (3 × 10 yd³), at each truck's or container's nominal capacity; a load is rarely filled exactly, so this can overstate what was hauled.";
+    const report = buildReport({
+      disposal: [
+        {
+          key: 'code:haul|cu yd',
+          code: 'HAUL',
+          description: 'Haul-off',
+          unit: 'cu yd',
+          budgeted: true,
+          estimatedQuantity: '27',
+          actualQuantity: '30',
+          loggedLoads: '3',
+          budgetUnitCost: '38.00',
+          estimatedCost: '1026.00',
+          actualCost: '1140.00',
+          variance: '114.00',
+        },
+      ],
+      notes: [note],
+    });
+    mockApi({ [routes.job]: json(job), [routes.report]: json(report) });
+    await openReport();
+
+    const disposal = await screen.findByRole('table', { name: 'Disposal' });
+    const haul = within(disposal).getByText('Haul-off').closest('tr')!;
+    expect([...haul.querySelectorAll('td')].map((cell) => cell.textContent)).toEqual([
+      'Haul-offHAUL',
+      'cu yd',
+      '27',
+      '30from 3 loads',
+      '$1,026.00',
+      '$1,140.00',
+    ]);
+    expect(screen.getByText(note)).toBeInTheDocument();
+  });
+
   it('colours the realised margin as good when the job did at least as well as quoted', async () => {
     setAccessToken('t');
     const report = buildReport();

@@ -1,3 +1,4 @@
+import { Text } from '@mantine/core';
 import type { JobCostReport } from '@pondwright/shared';
 import { Item, Spent, type Money } from './report-cells';
 import { ReportTable, type ReportColumn } from './report-table';
@@ -32,6 +33,19 @@ export function MaterialsTable({ report, money }: { report: Report; money: Money
   );
 }
 
+/** Disposal logged in loads shows in the budget's yd³, with the loads the crew counted beneath. */
+function ActualQuantity({ row }: { row: Report['equipment'][number] }) {
+  if (row.loggedLoads === null) return row.actualQuantity;
+  return (
+    <>
+      {row.actualQuantity}
+      <Text component="span" display="block" size="xs" c="dimmed">
+        from {row.loggedLoads} {row.loggedLoads === '1' ? 'load' : 'loads'}
+      </Text>
+    </>
+  );
+}
+
 /** Equipment and disposal share a shape: estimated and actual quantity in the budget line's unit. */
 export function QuantityTable({
   title,
@@ -48,7 +62,7 @@ export function QuantityTable({
     { header: 'Item', cell: (row) => <Item row={row} /> },
     { header: 'Unit', cell: (row) => row.unit },
     { header: 'Estimated', figure: true, cell: (row) => row.estimatedQuantity },
-    { header: 'Actual', figure: true, cell: (row) => row.actualQuantity },
+    { header: 'Actual', figure: true, cell: (row) => <ActualQuantity row={row} /> },
     { header: 'Estimated cost', figure: true, cell: (row) => money(row.estimatedCost) },
     {
       header: 'Actual cost',

@@ -24,6 +24,9 @@ const ERROR_TITLES: Record<string, string> = {
   INVOICE_PAID: 'The invoice is already paid',
   QUOTE_ALREADY_ANSWERED: 'The homeowner has already answered',
   JOB_CLOSED: 'The job is closed',
+  JOB_INVOICED: 'The final invoice is issued',
+  CREDIT_EXCEEDS_PAID: 'The credit is more than the homeowner still owes',
+  CHANGE_ORDER_SUPERSEDED: 'Another change was accepted first',
 };
 
 export function SendError({ error }: { error: unknown }) {

@@ -10,7 +10,17 @@ export function buildChangeOrder(overrides: Partial<ChangeOrderView> = {}): Chan
     number: 1,
     title: 'Second waterfall',
     reason: 'The homeowner asked for a spillway by the patio',
-    lines: [{ description: 'Boulders', quantity: '2', unit: 'ton', price: '255.00' }],
+    lines: [
+      {
+        change: 'added',
+        description: 'Boulders',
+        quantity: '2',
+        unit: 'ton',
+        fromQuantity: null,
+        toQuantity: null,
+        price: '255.00',
+      },
+    ],
     priceBeforeTax: '255.00',
     tax: '0.00',
     total: '255.00',

@@ -231,6 +231,7 @@ export function buildReport(overrides: Partial<JobCostReport> = {}): JobCostRepo
         budgeted: true,
         estimatedQuantity: '2',
         actualQuantity: '3',
+        loggedLoads: null,
         budgetUnitCost: '325.00',
         estimatedCost: '650.00',
         actualCost: '975.00',

@@ -1,4 +1,9 @@
-import type { ChangeOrderStatus, PhotoKind, RescheduleReason } from '@pondwright/shared';
+import type {
+  ChangeOrderLineChange,
+  ChangeOrderStatus,
+  PhotoKind,
+  RescheduleReason,
+} from '@pondwright/shared';
 
 export const RESCHEDULE_REASON_LABELS: Record<RescheduleReason, string> = {
   weather: 'Weather',
@@ -21,6 +26,12 @@ export const CHANGE_ORDER_STATUS_COLORS: Record<ChangeOrderStatus, string> = {
   sent: 'clay',
   accepted: 'reed',
   declined: 'red',
+};
+
+export const CHANGE_ORDER_LINE_LABELS: Record<ChangeOrderLineChange, string> = {
+  added: 'Added',
+  reduced: 'Reduced',
+  removed: 'Removed',
 };
 
 export const PHOTO_KIND_LABELS: Record<PhotoKind, string> = {
