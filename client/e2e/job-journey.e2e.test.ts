@@ -132,6 +132,7 @@ describe('a job from acceptance to close-out', () => {
     await office.getByRole('button', { name: 'New change order' }).click();
     const change = office.getByRole('dialog', { name: /change order/i });
     await change.getByRole('textbox', { name: 'Title' }).fill('Retaining wall behind the falls');
+    await change.getByRole('button', { name: 'Add a line' }).click();
     await change
       .getByRole('textbox', { name: 'Description of line 1' })
       .fill('Dry-stone retaining wall');

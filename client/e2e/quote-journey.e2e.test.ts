@@ -41,7 +41,7 @@ describe('the homeowner’s quote, from e-mail to deposit', () => {
     const dialog = staff.getByRole('dialog', { name: 'Send the quote to the homeowner' });
     await dialog.getByRole('textbox', { name: 'Homeowner’s e-mail' }).fill(HOMEOWNER_EMAIL);
     await dialog.getByRole('button', { name: 'Send quote' }).click();
-    await staff.getByRole('button', { name: 'Resend' }).waitFor();
+    await staff.getByRole('button', { name: 'Resend', exact: true }).waitFor();
 
     // The homeowner opens the link from the captured e-mail on a phone.
     const link = quoteLinkIn(await quoteMail(estimate.number));
