@@ -1,5 +1,8 @@
-// Types for bundle-size.mjs, for the client's TypeScript e2e check (client/e2e/quote-bundle-size.e2e.test.ts).
+// Types for bundle-size.mjs, for the client's TypeScript e2e checks (client/e2e/*bundle-size.e2e.test.ts).
 export declare const QUOTE_PAGE_BUDGET_BYTES: number;
+export declare const STAFF_APP_BUDGET_BYTES: number;
+export declare const QUOTE_TO_STAFF_MAX_RATIO: number;
+export declare const LAZY_ONLY: Array<{ name: string; pattern: RegExp }>;
 
 export type Manifest = Record<
   string,
@@ -22,4 +25,21 @@ export declare function entryFiles(manifest: Manifest, entryKey: string): EntryF
 export declare function measure(distDir: string, files: string[]): Measured;
 export declare function entryReport(distDir: string, entryKey: string): EntryReport;
 export declare function bundledSources(distDir: string, files: string[]): string[];
+export type BudgetCheck = {
+  name: string;
+  bytes: number;
+  goalBytes: number;
+  goal: string;
+  pass: boolean;
+};
+export type LazyCheck = { name: string; upFront: string[]; pass: boolean };
+export type ClientBudgets = {
+  staff: EntryReport;
+  quote: EntryReport;
+  checks: BudgetCheck[];
+  lazy: LazyCheck[];
+};
+
+export declare function clientBudgets(distDir: string): ClientBudgets;
+export declare function printSizeTable(title: string, measured: Measured): void;
 export declare function kb(bytes: number): string;

@@ -4,7 +4,6 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
-import { randomUUID } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import { AuthModule } from './auth/auth.module';
 import { CompaniesModule } from './companies/companies.module';
@@ -12,7 +11,7 @@ import { CustomersModule } from './customers/customers.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
 import { TenancyModule } from './common/tenancy/tenancy.module';
-import { redactRequestForLog } from './common/logging/redact-request';
+import { loggerParams } from './common/logging/logger-params';
 import { AppConfig } from './config/app-config';
 import { AppConfigModule } from './config/app-config.module';
 import { dataSourceOptions } from './database/data-source-options';
@@ -37,34 +36,18 @@ import {
 import { TakeoffModule } from './takeoff/takeoff.module';
 import { UsersModule } from './users/users.module';
 
-const REQUEST_ID = /^[A-Za-z0-9._-]{1,64}$/;
-
 @Module({
   imports: [
     AppConfigModule,
-    LoggerModule.forRootAsync({
-      inject: [AppConfig],
-      useFactory: (config: AppConfig) => ({
-        pinoHttp: {
-          level: config.logLevel,
-          genReqId: (request, response) => {
-            // A caller's (or proxy's) id is kept only when it is a plain token, so it cannot forge log lines.
-            const given = request.headers['x-request-id'];
-            const id = typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
-            response.setHeader('x-request-id', id);
-            return id;
-          },
-          // Tokens, cookies and passwords never reach the log.
-          redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
-          autoLogging: { ignore: (request) => request.url?.startsWith('/api/health') ?? false },
-          serializers: { req: redactRequestForLog },
-        },
-      }),
-    }),
+    LoggerModule.forRootAsync({ inject: [AppConfig], useFactory: loggerParams }),
     TypeOrmModule.forRootAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => dataSourceOptions(config.database),
     }),
+    // A coarse flood guard, counted in each instance's memory: behind a load balancer it allows up to
+    // the limit per instance, which is fine for its purpose. The limits that must hold across
+    // instances and restarts (failed sign-ins, wrong quote-link tokens) are counted in PostgreSQL.
+    // Per address, so behind a proxy TRUST_PROXY must be on or every caller shares the proxy's address.
     ThrottlerModule.forRootAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => ({

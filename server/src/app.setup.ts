@@ -1,3 +1,4 @@
+import { RequestMethod } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
@@ -7,6 +8,7 @@ import { Logger } from 'nestjs-pino';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { createValidationPipe } from './common/validation/validation-pipe';
 import { AppConfig } from './config/app-config';
+import { QUOTE_PAGE_ROUTE } from './quote-page-host/quote-page-host.module';
 
 const PRICE_BOOK_IMPORT_PATH = '/api/price-book/import';
 /** The payment webhook's signature is over the exact bytes sent, so its body stays raw. */
@@ -19,9 +21,21 @@ export const NEST_APP_OPTIONS = { bodyParser: false } as const;
 export function configureApp(app: NestExpressApplication): void {
   const config = app.get(AppConfig);
   app.useLogger(app.get(Logger));
-  app.setGlobalPrefix('api');
+  // The quote page is served beside the API, not under it; naming it here puts it under the request
+  // logger (and its request id), which Nest mounts on the prefix and on the routes excluded from it.
+  app.setGlobalPrefix('api', { exclude: [{ path: QUOTE_PAGE_ROUTE, method: RequestMethod.GET }] });
   app.set('trust proxy', config.trustProxy ? 1 : false);
   app.disable('x-powered-by');
+  // CORS for the app's own origin only (security review: no policy was set). The app and its API
+  // share an origin, so browsers need none; naming PUBLIC_APP_URL keeps a split deployment working,
+  // and any other origin's preflight or request gets no Access-Control-Allow-Origin, so its pages
+  // cannot read an answer, signed in or not.
+  app.enableCors({
+    origin: [new URL(config.publicAppUrl).origin],
+    credentials: true,
+    methods: ['GET', 'HEAD', 'POST', 'PUT', 'PATCH', 'DELETE'],
+    maxAge: 600,
+  });
   const errors = new ApiExceptionFilter();
   // Nest's own body parser is off (see createApp) so that parse errors reach our error shape.
   // A price-book CSV import is the one larger body: a full book (5,000 materials) runs to a few MB.

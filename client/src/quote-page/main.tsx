@@ -26,15 +26,23 @@ import '@mantine/core/styles/Checkbox.css';
 import './quote-page.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { createQuoteQueryClient, quoteQueryOptions } from './api/quote-queries';
+import { tokenFromPath } from './lib/location';
 import { QuotePage } from './quote-page';
 import { QuoteProviders } from './quote-providers';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('The page has no #root element');
 
+// The quote is asked for now, while React renders the loading state, not after that render: the
+// quote is the page's largest paint, and it waits for this answer.
+const queryClient = createQuoteQueryClient();
+const token = tokenFromPath(window.location.pathname);
+if (token) void queryClient.prefetchQuery(quoteQueryOptions(token));
+
 createRoot(root).render(
   <StrictMode>
-    <QuoteProviders>
+    <QuoteProviders queryClient={queryClient}>
       <QuotePage pathname={window.location.pathname} search={window.location.search} />
     </QuoteProviders>
   </StrictMode>,

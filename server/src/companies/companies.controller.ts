@@ -14,6 +14,11 @@ import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { CompanyProfile, CompanyQuoteTerms } from '@pondwright/shared';
 import type { Response } from 'express';
+import {
+  ApiFileResponse,
+  ApiJsonResponse,
+  ApiUploadBody,
+} from '../common/decorators/api-docs.decorators';
 import { AnyRole, Roles } from '../common/decorators/auth.decorators';
 import { CompaniesService, MAX_LOGO_BYTES } from './companies.service';
 import { quoteTermsBodyDoc } from './dto/quote-terms.dto';
@@ -41,6 +46,11 @@ export class CompaniesController {
 
   @AnyRole()
   @Get('quote-terms')
+  @ApiJsonResponse(
+    200,
+    'CompanyQuoteTerms',
+    'The terms printed on quotes, and whether they are the default',
+  )
   quoteTerms(): Promise<CompanyQuoteTerms> {
     return this.companies.quoteTerms();
   }
@@ -49,6 +59,7 @@ export class CompaniesController {
   @Roles('owner')
   @Put('quote-terms')
   @ApiBody({ schema: quoteTermsBodyDoc })
+  @ApiJsonResponse(200, 'CompanyQuoteTerms', 'The terms now printed on quotes')
   setQuoteTerms(@Body() body: unknown): Promise<CompanyQuoteTerms> {
     return this.companies.setQuoteTerms(body);
   }
@@ -60,6 +71,7 @@ export class CompaniesController {
   @Roles('owner')
   @Put('logo')
   @ApiConsumes('multipart/form-data')
+  @ApiUploadBody('logo')
   @UseInterceptors(
     FileInterceptor('logo', { limits: { fileSize: MAX_LOGO_BYTES + 1, files: 1, fields: 0 } }),
   )
@@ -79,6 +91,7 @@ export class CompaniesController {
 
   @AnyRole()
   @Get('logo')
+  @ApiFileResponse('image/*', 'The company’s logo (PNG or JPEG), with an ETag; 304 when unchanged')
   async logo(
     @Headers('if-none-match') ifNoneMatch: string | undefined,
     @Res() response: Response,

@@ -7,6 +7,7 @@ import {
   type CompanyQuoteTerms,
 } from '@pondwright/shared';
 import { createHash } from 'node:crypto';
+import sharp from 'sharp';
 import { Repository } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
@@ -52,11 +53,12 @@ export class CompaniesService {
         { field: 'logo', message: 'Use a PNG or JPEG image' },
       ]);
     }
+    const bytes = await reencodeLogo(file.buffer, contentType);
     await this.logos.save({
       companyId: this.tenant.companyId,
       contentType,
-      bytes: file.buffer,
-      sha256: createHash('sha256').update(file.buffer).digest('hex'),
+      bytes,
+      sha256: createHash('sha256').update(bytes).digest('hex'),
       updatedAt: new Date(),
     });
     return this.current();
@@ -115,6 +117,31 @@ function termsView(company: Company): CompanyQuoteTerms {
 }
 
 const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+/** Decoding bombs: a logo is small, so anything over 16 megapixels is refused (the PDF's own cap). */
+const MAX_LOGO_PIXELS = 16_000_000;
+
+/**
+ * The logo decoded and encoded again in its own format, turned upright first. The first bytes alone
+ * let through a file that merely starts like a PNG or JPEG (an HTML or PHP page behind the
+ * signature), and the bytes as sent kept their EXIF, GPS position included, for every homeowner who
+ * opened a quote (security review): sharp writes no metadata unless asked, and drops anything hidden
+ * after the image. PNG stays lossless; a JPEG is written at quality 90 so the mark stays crisp.
+ */
+async function reencodeLogo(
+  input: Buffer,
+  contentType: CompanyLogo['contentType'],
+): Promise<Buffer> {
+  try {
+    const image = sharp(input, { limitInputPixels: MAX_LOGO_PIXELS }).rotate();
+    return await (
+      contentType === 'image/png' ? image.png({ compressionLevel: 9 }) : image.jpeg({ quality: 90 })
+    ).toBuffer();
+  } catch {
+    throw new AppError('LOGO_INVALID', 'The logo could not be opened; it may be damaged', [
+      { field: 'logo', message: 'Use a PNG or JPEG image' },
+    ]);
+  }
+}
 
 function imageTypeOf(bytes: Buffer): CompanyLogo['contentType'] | null {
   if (bytes.subarray(0, 8).equals(PNG_SIGNATURE)) return 'image/png';

@@ -32,6 +32,7 @@ export class AppConfig {
     return this.get('TRUST_PROXY');
   }
   get database(): DatabaseSettings {
+    const replicaHost = this.get('DB_REPLICA_HOST');
     return {
       host: this.get('DB_HOST'),
       port: this.get('DB_PORT'),
@@ -39,6 +40,9 @@ export class AppConfig {
       password: this.get('DB_PASSWORD'),
       database: this.get('DB_NAME'),
       poolSize: this.get('DB_POOL_SIZE'),
+      replica: replicaHost
+        ? { host: replicaHost, port: this.get('DB_REPLICA_PORT') ?? this.get('DB_PORT') }
+        : null,
     };
   }
   get jwt() {

@@ -45,6 +45,9 @@ export const envSchema = databaseEnvSchema
     LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(10),
     LOGIN_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
     RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
+    // A streaming read replica for the reports only (docs/scaling.md); unset, they read the primary.
+    DB_REPLICA_HOST: z.string().min(1).optional(),
+    DB_REPLICA_PORT: z.coerce.number().int().min(1).max(65535).optional(),
     CLIENT_DIST_DIR: z.string().optional(),
     // E-mail: nodemailer over SMTP. `npm start` and `npm test` point these at the local fake SMTP server.
     SMTP_HOST: z.string().min(1).default('127.0.0.1'),
@@ -84,6 +87,13 @@ export const envSchema = databaseEnvSchema
       .default('info'),
   })
   .superRefine((env, context) => {
+    if (env.DB_REPLICA_PORT !== undefined && env.DB_REPLICA_HOST === undefined) {
+      context.addIssue({
+        code: 'custom',
+        path: ['DB_REPLICA_HOST'],
+        message: 'Set DB_REPLICA_HOST with DB_REPLICA_PORT (or leave both unset)',
+      });
+    }
     // Production talks to the real provider and a real mail server: the local fakes' settings are refused.
     if (env.NODE_ENV !== 'production') return;
     const refuse = (path: string, message: string) =>

@@ -2,12 +2,11 @@ import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } fr
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
-  ApiCreatedResponse,
   ApiNotFoundResponse,
-  ApiOkResponse,
   ApiTags,
 } from '@nestjs/swagger';
 import type { CustomerDetail, CustomerPage, SiteView } from '@pondwright/shared';
+import { ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { AnyRole, Roles } from '../common/decorators/auth.decorators';
 import {
   CreateCustomerDto,
@@ -30,14 +29,14 @@ export class CustomersController {
 
   @AnyRole()
   @Get()
-  @ApiOkResponse({ description: 'One page of customers, searched and sorted on the server' })
+  @ApiJsonResponse(200, 'CustomerPage', 'One page of customers, searched and sorted on the server')
   list(@Query() query: CustomerListQueryDto): Promise<CustomerPage> {
     return this.customers.list(query);
   }
 
   @Roles('owner', 'estimator')
   @Post()
-  @ApiCreatedResponse({ description: 'The customer with any sites sent along' })
+  @ApiJsonResponse(201, 'CustomerDetail', 'The customer with any sites sent along')
   @ApiBadRequestResponse({ description: 'One message per field' })
   create(@Body() body: CreateCustomerDto): Promise<CustomerDetail> {
     return this.customers.create(body);
@@ -45,7 +44,7 @@ export class CustomersController {
 
   @AnyRole()
   @Get(':id')
-  @ApiOkResponse({ description: 'The customer with every site' })
+  @ApiJsonResponse(200, 'CustomerDetail', 'The customer with every site')
   @ApiNotFoundResponse()
   get(@Param('id') id: string): Promise<CustomerDetail> {
     return this.customers.get(id);
@@ -53,7 +52,7 @@ export class CustomersController {
 
   @Roles('owner', 'estimator')
   @Patch(':id')
-  @ApiOkResponse()
+  @ApiJsonResponse(200, 'CustomerDetail', 'The customer as saved, with every site')
   update(@Param('id') id: string, @Body() body: UpdateCustomerDto): Promise<CustomerDetail> {
     return this.customers.update(id, body);
   }
@@ -67,14 +66,14 @@ export class CustomersController {
 
   @Roles('owner', 'estimator')
   @Post(':id/sites')
-  @ApiCreatedResponse()
+  @ApiJsonResponse(201, 'SiteView', 'The new site')
   addSite(@Param('id') id: string, @Body() body: CreateSiteDto): Promise<SiteView> {
     return this.customers.addSite(id, body);
   }
 
   @Roles('owner', 'estimator')
   @Patch(':id/sites/:siteId')
-  @ApiOkResponse()
+  @ApiJsonResponse(200, 'SiteView', 'The site as saved')
   updateSite(
     @Param('id') id: string,
     @Param('siteId') siteId: string,

@@ -1,5 +1,6 @@
 import { Controller, Get } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { Roles } from '../common/decorators/auth.decorators';
 import { EstimatesStatsService, type EstimateStats } from './estimates-stats.service';
 
@@ -12,9 +13,11 @@ export class EstimatesStatsController {
   constructor(private readonly stats: EstimatesStatsService) {}
 
   @Get()
-  @ApiOkResponse({
-    description: 'Count and value by status, win rate and average margin, for the caller’s company',
-  })
+  @ApiJsonResponse(
+    200,
+    'EstimateStats',
+    'Count and value by status, win rate and average margin, for the caller’s company',
+  )
   get(): Promise<EstimateStats> {
     return this.stats.stats();
   }

@@ -1,8 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { ESTIMATE_STATUSES, type EstimateStatus } from '@pondwright/shared';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { TenantContext } from '../common/tenancy/tenant-context';
+import { readOnReplica } from '../database/read-replica';
 
 /** `GET /api/estimate-stats`: the owner's pipeline. Money and percentages are decimal strings. */
 export type EstimateStats = {
@@ -26,7 +27,8 @@ type SummaryRow = {
 /**
  * Pipeline figures for the owner's dashboard, aggregated in SQL over the caller's company only.
  * An estimate's value is its latest version's total, or its draft's before it has a version; sums and
- * means are exact `numeric` rounded once, to 2 decimals, at the end.
+ * means are exact `numeric` rounded once, to 2 decimals, at the end. Read on the replica when there
+ * is one (a report may be a moment behind).
  */
 @Injectable()
 export class EstimatesStatsService {
@@ -35,7 +37,11 @@ export class EstimatesStatsService {
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
-  async stats(): Promise<EstimateStats> {
+  stats(): Promise<EstimateStats> {
+    return readOnReplica(this.dataSource, (manager) => this.aggregate(manager));
+  }
+
+  private async aggregate(manager: EntityManager): Promise<EstimateStats> {
     const latest = `
       SELECT e.status,
              (COALESCE(v.computed, d.computed) -> 'priced' -> 'totals' ->> 'total')::numeric AS total,
@@ -49,12 +55,12 @@ export class EstimatesStatsService {
       ) v ON true
       WHERE e.company_id = $1`;
     const companyId = this.tenant.companyId;
-    const statusRows = (await this.dataSource.query(
+    const statusRows = (await manager.query(
       `SELECT status, count(*)::int AS count, round(sum(total), 2)::text AS value
        FROM (${latest}) latest GROUP BY status`,
       [companyId],
     )) as StatusRow[];
-    const [summary] = (await this.dataSource.query(
+    const [summary] = (await manager.query(
       `SELECT
          (SELECT round(100 * count(*) FILTER (WHERE status = 'accepted')::numeric
                    / NULLIF(count(*) FILTER (WHERE status IN ('accepted', 'declined')), 0), 2)::text

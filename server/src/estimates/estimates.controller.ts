@@ -4,8 +4,6 @@ import {
   ApiBearerAuth,
   ApiBody,
   ApiConflictResponse,
-  ApiCreatedResponse,
-  ApiOkResponse,
   ApiTags,
 } from '@nestjs/swagger';
 import type {
@@ -15,6 +13,7 @@ import type {
   EstimateVersionView,
   EstimateView,
 } from '@pondwright/shared';
+import { ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import {
   createEstimateBodyDoc,
@@ -36,27 +35,30 @@ export class EstimatesController {
 
   @Post()
   @ApiBody({ schema: createEstimateBodyDoc })
-  @ApiCreatedResponse({ description: 'Numbered, with a first draft priced by the server' })
+  @ApiJsonResponse(201, 'EstimateView', 'Numbered, with a first draft priced by the server')
   create(@Body() body: unknown, @CurrentUser() user: Principal): Promise<EstimateView> {
     return this.estimates.create(body, user.userId);
   }
 
   @Get()
-  @ApiOkResponse({
-    description: 'Newest change first; filter by status, search title, customer, number',
-  })
+  @ApiJsonResponse(
+    200,
+    'EstimateListPage',
+    'Newest change first; filter by status, search title, customer, number',
+  )
   list(@Query() query: EstimateListQuery): Promise<EstimateListPage> {
     return this.estimates.list(query);
   }
 
   @Get(':id')
+  @ApiJsonResponse(200, 'EstimateView', 'The estimate with its working draft and versions')
   get(@Param('id') id: string): Promise<EstimateView> {
     return this.estimates.get(id);
   }
 
   @Put(':id/draft')
   @ApiBody({ schema: saveDraftBodyDoc })
-  @ApiOkResponse({ description: 'Recomputed and stored with the next revision' })
+  @ApiJsonResponse(200, 'EstimateView', 'Recomputed and stored with the next revision')
   @ApiBadRequestResponse({ description: 'One message per field, e.g. `input.basins.0.maxDepthFt`' })
   @ApiConflictResponse({ description: 'STALE_DRAFT: the current draft is in `current`' })
   saveDraft(
@@ -69,7 +71,7 @@ export class EstimatesController {
 
   @Post(':id/finalise')
   @ApiBody({ schema: finaliseEstimateBodyDoc })
-  @ApiCreatedResponse({ description: 'A new immutable version; awaiting approval or approved' })
+  @ApiJsonResponse(201, 'EstimateView', 'A new immutable version; awaiting approval or approved')
   @ApiConflictResponse({ description: 'STALE_DRAFT, or ESTIMATE_NOT_FINALISABLE' })
   finalise(
     @Param('id') id: string,
@@ -80,6 +82,7 @@ export class EstimatesController {
   }
 
   @Get(':id/versions/:versionNumber')
+  @ApiJsonResponse(200, 'EstimateVersionView', 'One frozen version with its content hash')
   getVersion(
     @Param('id') id: string,
     @Param('versionNumber') versionNumber: string,
@@ -88,7 +91,11 @@ export class EstimatesController {
   }
 
   @Get(':id/compare')
-  @ApiOkResponse({ description: 'Lines and totals that differ from version a to version b' })
+  @ApiJsonResponse(
+    200,
+    'EstimateComparison',
+    'Lines and totals that differ from version a to version b',
+  )
   compare(
     @Param('id') id: string,
     @Query('a') a: string | undefined,
@@ -99,6 +106,7 @@ export class EstimatesController {
 
   @Post(':id/approve')
   @Roles('owner')
+  @ApiJsonResponse(201, 'EstimateView', 'Approved: ready to send')
   approve(@Param('id') id: string, @CurrentUser() user: Principal): Promise<EstimateView> {
     return this.estimates.approve(id, user.userId);
   }
@@ -106,6 +114,7 @@ export class EstimatesController {
   @Post(':id/send-back')
   @Roles('owner')
   @ApiBody({ schema: sendBackEstimateBodyDoc })
+  @ApiJsonResponse(201, 'EstimateView', 'Back to a draft, with the owner’s reason in the log')
   sendBack(
     @Param('id') id: string,
     @Body() body: unknown,
@@ -124,7 +133,11 @@ export class ApprovalsController {
   constructor(private readonly estimates: EstimatesService) {}
 
   @Get()
-  @ApiOkResponse({ description: 'Oldest first, each with the reasons it needs approval' })
+  @ApiJsonResponse(
+    200,
+    'ApprovalQueueItem[]',
+    'Oldest first, each with the reasons it needs approval',
+  )
   queue(): Promise<ApprovalQueueItem[]> {
     return this.estimates.approvalQueue();
   }

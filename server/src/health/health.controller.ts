@@ -5,6 +5,12 @@ import { DataSource } from 'typeorm';
 import { Public } from '../common/decorators/auth.decorators';
 
 const DATABASE_CHECK_TIMEOUT_MS = 2000;
+const STATUS_OK_SCHEMA = {
+  type: 'object',
+  properties: { status: { type: 'string', enum: ['ok'] } },
+  required: ['status'],
+  example: { status: 'ok' },
+};
 
 @ApiTags('health')
 @Controller('health')
@@ -17,7 +23,7 @@ export class HealthController {
    */
   @Public()
   @Get('live')
-  @ApiOkResponse({ schema: { example: { status: 'ok' } } })
+  @ApiOkResponse({ schema: STATUS_OK_SCHEMA, description: 'The process answers' })
   live(): { status: 'ok' } {
     return { status: 'ok' };
   }
@@ -28,7 +34,7 @@ export class HealthController {
    */
   @Public()
   @Get(['', 'ready'])
-  @ApiOkResponse({ schema: { example: { status: 'ok' } } })
+  @ApiOkResponse({ schema: STATUS_OK_SCHEMA, description: 'The database answers' })
   @ApiServiceUnavailableResponse({ description: 'The database is not answering' })
   async check(): Promise<{ status: 'ok' }> {
     let timer: NodeJS.Timeout | undefined;

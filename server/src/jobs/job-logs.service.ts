@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { saveDailyLogRequestSchema, type DailyLogView } from '@pondwright/shared';
 import { createHash } from 'node:crypto';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
 import { isUuid } from '../common/tenancy/tenant-repository';
@@ -26,8 +26,11 @@ export class JobLogsService {
     private readonly tenant: TenantContext,
   ) {}
 
-  async list(jobId: string): Promise<DailyLogView[]> {
-    const logs = await this.dataSource.manager.find(JobLog, {
+  async list(
+    jobId: string,
+    manager: EntityManager = this.dataSource.manager,
+  ): Promise<DailyLogView[]> {
+    const logs = await manager.find(JobLog, {
       where: { jobId, companyId: this.tenant.companyId },
       relations: { author: true },
       order: { logDate: 'ASC', createdAt: 'ASC' },

@@ -1,7 +1,21 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Put, Query, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { DailyLogView, JobCostReport, JobListItem, JobView } from '@pondwright/shared';
+import {
+  createJobRequestSchema,
+  jobStatusRequestSchema,
+  rescheduleJobRequestSchema,
+  saveDailyLogRequestSchema,
+  type DailyLogView,
+  type JobCostReport,
+  type JobListItem,
+  type JobView,
+} from '@pondwright/shared';
 import type { Response } from 'express';
+import {
+  ApiFileResponse,
+  ApiJsonResponse,
+  ApiZodBody,
+} from '../common/decorators/api-docs.decorators';
 import { AnyRole, CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import { JobLogsService } from './job-logs.service';
 import { JobReportService } from './job-report.service';
@@ -19,12 +33,14 @@ export class JobsController {
 
   @Roles('owner', 'estimator')
   @Get(':id/report')
+  @ApiJsonResponse(200, 'JobCostReport', 'Budget against actual hours, materials and costs')
   report(@Param('id') id: string): Promise<JobCostReport> {
     return this.reports.report(id);
   }
 
   @Roles('owner', 'estimator')
   @Get(':id/report.csv')
+  @ApiFileResponse('text/csv', 'The cost report as CSV, for a spreadsheet')
   async reportCsv(@Param('id') id: string, @Res() response: Response): Promise<void> {
     const csv = await this.reports.csv(id);
     response
@@ -34,15 +50,17 @@ export class JobsController {
       .send(csv.text);
   }
 
-  /** Body: `createJobRequestSchema`. */
   @Roles('owner', 'estimator')
   @Post()
+  @ApiZodBody(createJobRequestSchema)
+  @ApiJsonResponse(201, 'JobView', 'The job, its budget fixed from the accepted lines')
   create(@Body() body: unknown, @CurrentUser() user: Principal): Promise<JobView> {
     return this.jobs.create(body, user.userId, user.role);
   }
 
   @AnyRole()
   @Get()
+  @ApiJsonResponse(200, 'JobListItem[]', 'Jobs in the date range, by status or crew')
   list(
     @Query() query: { from?: string; to?: string; status?: string; crewId?: string },
   ): Promise<JobListItem[]> {
@@ -51,14 +69,16 @@ export class JobsController {
 
   @AnyRole()
   @Get(':id')
+  @ApiJsonResponse(200, 'JobView', 'The job; crew leads see no prices')
   get(@Param('id') id: string, @CurrentUser() user: Principal): Promise<JobView> {
     return this.jobs.get(id, user.role);
   }
 
-  /** Body: `rescheduleJobRequestSchema`. */
   @Roles('owner', 'estimator')
   @Post(':id/schedule')
   @HttpCode(200)
+  @ApiZodBody(rescheduleJobRequestSchema)
+  @ApiJsonResponse(200, 'JobView', 'Rescheduled; the change is kept in the job’s history')
   reschedule(
     @Param('id') id: string,
     @Body() body: unknown,
@@ -67,10 +87,12 @@ export class JobsController {
     return this.jobs.reschedule(id, body, user.userId, user.role);
   }
 
-  /** Body: `jobStatusRequestSchema`; closing is the owner's (checked with the step). */
+  /** Closing is the owner's (checked with the step). */
   @AnyRole()
   @Post(':id/status')
   @HttpCode(200)
+  @ApiZodBody(jobStatusRequestSchema)
+  @ApiJsonResponse(200, 'JobView', 'The job in its new status')
   setStatus(
     @Param('id') id: string,
     @Body() body: unknown,
@@ -81,14 +103,18 @@ export class JobsController {
 
   @AnyRole()
   @Get(':id/logs')
+  @ApiJsonResponse(200, 'DailyLogView[]', 'The crew’s daily logs, by day')
   async listLogs(@Param('id') id: string): Promise<DailyLogView[]> {
     const job = await this.jobs.findJob(id);
     return this.logs.list(job.id);
   }
 
-  /** Body: `saveDailyLogRequestSchema`. 201 when the log is new, 200 for an edit or a resend. */
+  /** 201 when the log is new, 200 for an edit or a resend (the phone makes the id, so it is idempotent). */
   @AnyRole()
   @Put(':id/logs/:logId')
+  @ApiZodBody(saveDailyLogRequestSchema)
+  @ApiJsonResponse(200, 'DailyLogView', 'The log as saved: an edit, or the same log sent again')
+  @ApiJsonResponse(201, 'DailyLogView', 'The new log')
   async saveLog(
     @Param('id') id: string,
     @Param('logId') logId: string,

@@ -286,8 +286,8 @@ export class JobsService {
   }
 
   /** The job's number: its estimate's. */
-  async numberOf(job: Job): Promise<number> {
-    const [row] = (await this.dataSource.query('SELECT number FROM estimates WHERE id = $1', [
+  async numberOf(job: Job, manager: EntityManager = this.dataSource.manager): Promise<number> {
+    const [row] = (await manager.query('SELECT number FROM estimates WHERE id = $1', [
       job.estimateId,
     ])) as Array<{ number: number }>;
     return row!.number;

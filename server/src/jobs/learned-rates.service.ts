@@ -2,10 +2,11 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { adoptLearnedRateRequestSchema, learnedRates, type LearnedRate } from '@pondwright/shared';
 import type { LaborTask } from '@pondwright/shared/engine';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { TenantContext } from '../common/tenancy/tenant-context';
 import { parseBody } from '../common/validation/parse-body';
+import { readOnReplica } from '../database/read-replica';
 import type { PriceBookVersionView } from '../price-book/dto/price-book.dto';
 import { PriceBookService } from '../price-book/price-book.service';
 import { Job } from './entities/job.entity';
@@ -19,14 +20,20 @@ export class LearnedRatesService {
     private readonly priceBook: PriceBookService,
   ) {}
 
-  async list(): Promise<LearnedRate[]> {
+  /** The report, read on the replica when there is one (a job closed a moment ago may show later). */
+  list(): Promise<LearnedRate[]> {
+    return readOnReplica(this.dataSource, (manager) => this.learn(manager));
+  }
+
+  private async learn(manager: EntityManager): Promise<LearnedRate[]> {
+    // The book in force is one small row, read where it is written: a rate just adopted shows at once.
     const book = await this.priceBook.currentVersion();
     const companyId = this.tenant.companyId;
-    const jobs = await this.dataSource.manager.find(Job, {
+    const jobs = await manager.find(Job, {
       where: { companyId, status: 'closed' },
     });
     // Hours logged per job and task, summed in the database from every day's entries.
-    const rows = (await this.dataSource.query(
+    const rows = (await manager.query(
       `SELECT l.job_id, e->>'task' AS task, sum((e->>'hours')::numeric) AS hours
        FROM job_logs l CROSS JOIN LATERAL jsonb_array_elements(l.entries) AS e
        JOIN jobs j ON j.id = l.job_id
@@ -48,7 +55,10 @@ export class LearnedRatesService {
   /** A new price-book version, effective today, with the learned value of one rate. */
   async adopt(body: unknown, authorId: string): Promise<PriceBookVersionView> {
     const { parameter } = parseBody(adoptLearnedRateRequestSchema, body);
-    const rate = (await this.list()).find((candidate) => candidate.parameter === parameter)!;
+    // Decided on the primary: a new price-book version must not be built from a lagging copy.
+    const rate = (await this.learn(this.dataSource.manager)).find(
+      (candidate) => candidate.parameter === parameter,
+    )!;
     if (rate.learnedValue === null) {
       throw new AppError('NOTHING_LEARNED', 'No closed job has taught this rate yet.');
     }

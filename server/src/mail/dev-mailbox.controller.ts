@@ -1,6 +1,7 @@
 import { Controller, Delete, Get, HttpCode } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { MailboxMessage } from '@pondwright/shared';
+import { ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { Roles } from '../common/decorators/auth.decorators';
 import { AppError } from '../common/errors/app-error';
 import { AppConfig } from '../config/app-config';
@@ -17,6 +18,7 @@ export class DevMailboxController {
   constructor(private readonly config: AppConfig) {}
 
   @Get()
+  @ApiJsonResponse(200, 'MailboxMessage[]', 'Every e-mail the local fake SMTP server caught')
   async list(): Promise<MailboxMessage[]> {
     const response = await this.call('GET');
     return (await response.json()) as MailboxMessage[];

@@ -1,12 +1,7 @@
 import { Controller, HttpCode, Param, Post } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiTags,
-} from '@nestjs/swagger';
+import { ApiBearerAuth, ApiConflictResponse, ApiNotFoundResponse, ApiTags } from '@nestjs/swagger';
 import type { EmailDeliveryView } from '@pondwright/shared';
+import { ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import { OutboxService } from './outbox.service';
 
@@ -20,10 +15,11 @@ export class OutboxController {
 
   @Post(':id/retry')
   @HttpCode(200)
-  @ApiOkResponse({
-    description:
-      'The e-mail queued again (`EmailDeliveryView`): attempts from zero, same Message-ID',
-  })
+  @ApiJsonResponse(
+    200,
+    'EmailDeliveryView',
+    'The e-mail queued again: attempts from zero, same Message-ID',
+  )
   @ApiNotFoundResponse({ description: 'No such e-mail in the caller’s company' })
   @ApiConflictResponse({ description: 'MAIL_NOT_FAILED: the e-mail is still queued or was sent' })
   retry(@Param('id') id: string, @CurrentUser() user: Principal): Promise<EmailDeliveryView> {

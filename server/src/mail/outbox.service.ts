@@ -136,7 +136,11 @@ export class OutboxService implements OnApplicationBootstrap, OnModuleDestroy {
   private async drainBatches(): Promise<number> {
     let sent = 0;
     for (;;) {
-      const batch = await this.claim(20);
+      // One message per claim, so a lease only ever covers the one send it was taken for. Claimed
+      // twenty at a time, a slow mail server (twenty sends outlasting the 120 s lease) let the lease
+      // run out on messages still waiting in this worker's batch: another instance took them over
+      // and both sent them (test/outbox-reliability.e2e-spec.ts).
+      const batch = await this.claim(1);
       if (batch.length === 0) return sent;
       for (const message of batch) {
         if (await this.attempt(message)) sent += 1;

@@ -208,12 +208,17 @@ export class PaymentsService {
     if (payment.status === 'paid') return payment.id;
     const estimate = await manager.findOneByOrFail(Estimate, { id: payment.estimateId });
     const received = session.amount_total ?? -1;
+    // An amount is its currency too: 5,000 in yen's minor units is not $50.00 (security review: a
+    // session reporting the right number in another currency was credited as paid).
+    const receivedCurrency = (session.currency ?? '').toUpperCase();
     const alreadyPaid = await manager.existsBy(Payment, {
       estimateId: payment.estimateId,
       purpose: payment.purpose,
       status: 'paid',
     });
-    if (received !== moneyToMinorUnits(payment.amount) || alreadyPaid) {
+    const asAsked =
+      received === moneyToMinorUnits(payment.amount) && receivedCurrency === payment.currency;
+    if (!asAsked || alreadyPaid) {
       // Paid, but not as asked (a changed amount, or a second checkout paid as well): a person must
       // look, and perhaps refund. Recorded on the estimate instead of silently counted.
       await recordEstimateEvent(manager, {
@@ -224,6 +229,7 @@ export class PaymentsService {
         detail: {
           checkoutSessionId: session.id,
           amountReceivedMinor: received,
+          currencyReceived: receivedCurrency,
           reason: alreadyPaid
             ? 'a deposit was already paid'
             : 'amount differs from the deposit asked',

@@ -10,8 +10,13 @@ import {
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
-import type { PhotoView } from '@pondwright/shared';
+import { uploadPhotoFieldsSchema, type PhotoView } from '@pondwright/shared';
 import type { Response } from 'express';
+import {
+  ApiFileResponse,
+  ApiJsonResponse,
+  ApiUploadBody,
+} from '../common/decorators/api-docs.decorators';
 import { AnyRole, CurrentUser, type Principal } from '../common/decorators/auth.decorators';
 import { PhotosService, type UploadedPhotoFile } from './photos.service';
 import { PHOTO_UPLOAD_LIMITS } from './upload-limits';
@@ -24,13 +29,17 @@ export class PhotosController {
   constructor(private readonly photos: PhotosService) {}
 
   @Get()
+  @ApiJsonResponse(200, 'PhotoView[]', 'The job’s photos')
   list(@Param('jobId') jobId: string): Promise<PhotoView[]> {
     return this.photos.list(jobId);
   }
 
-  /** Multipart: file `photo`, fields `uploadPhotoFieldsSchema`. 201 new, 200 when already stored. */
+  /** 201 new, 200 when already stored (the phone makes the id, so a resend is harmless). */
   @Put(':photoId')
   @ApiConsumes('multipart/form-data')
+  @ApiUploadBody('photo', uploadPhotoFieldsSchema)
+  @ApiJsonResponse(200, 'PhotoView', 'Already stored under this id')
+  @ApiJsonResponse(201, 'PhotoView', 'Stored, with a thumbnail')
   @UseInterceptors(FileInterceptor('photo', { limits: PHOTO_UPLOAD_LIMITS }))
   async upload(
     @Param('jobId') jobId: string,
@@ -46,6 +55,7 @@ export class PhotosController {
   }
 
   @Get(':photoId/image')
+  @ApiFileResponse('image/jpeg', 'The photo, upright, at most 2048 px')
   async image(
     @Param('jobId') jobId: string,
     @Param('photoId') photoId: string,
@@ -55,6 +65,7 @@ export class PhotosController {
   }
 
   @Get(':photoId/thumbnail')
+  @ApiFileResponse('image/webp', 'A 320 px thumbnail')
   async thumbnail(
     @Param('jobId') jobId: string,
     @Param('photoId') photoId: string,

@@ -3,14 +3,12 @@ import {
   ApiBadRequestResponse,
   ApiBearerAuth,
   ApiBody,
-  ApiCreatedResponse,
   ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiProduces,
   ApiTags,
 } from '@nestjs/swagger';
 import type { PriceBookChange } from '@pondwright/shared/pricing';
 import type { Response } from 'express';
+import { ApiFileResponse, ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { AnyRole, CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import {
   importPriceBookBodyDoc,
@@ -35,7 +33,7 @@ export class PriceBookController {
 
   @Roles('owner', 'estimator')
   @Get()
-  @ApiOkResponse({ description: 'The version in effect today, with the whole book' })
+  @ApiJsonResponse(200, 'PriceBookVersionView', 'The version in effect today, with the whole book')
   @ApiNotFoundResponse({ description: 'The company has no price book in effect yet' })
   current(): Promise<PriceBookVersionView> {
     return this.priceBook.current();
@@ -45,7 +43,7 @@ export class PriceBookController {
   @Put()
   @HttpCode(201)
   @ApiBody({ schema: savePriceBookBodyDoc })
-  @ApiCreatedResponse({ description: 'The new version' })
+  @ApiJsonResponse(201, 'PriceBookVersionView', 'The new version')
   @ApiBadRequestResponse({ description: 'One message per field, e.g. `book.materials.3.unitCost`' })
   save(@Body() body: unknown, @CurrentUser() user: Principal): Promise<PriceBookVersionView> {
     return this.priceBook.save(body, user.userId);
@@ -53,28 +51,36 @@ export class PriceBookController {
 
   @Roles('owner', 'estimator')
   @Get('versions')
-  @ApiOkResponse({ description: 'Every version, newest first, without the book' })
+  @ApiJsonResponse(
+    200,
+    'PriceBookVersionListItem[]',
+    'Every version, newest first, without the book',
+  )
   listVersions(): Promise<PriceBookVersionListItem[]> {
     return this.priceBook.listVersions();
   }
 
   @Roles('owner', 'estimator')
   @Get('versions/:id')
-  @ApiOkResponse({ description: 'One version with its book' })
+  @ApiJsonResponse(200, 'PriceBookVersionView', 'One version with its book')
   getVersion(@Param('id') id: string): Promise<PriceBookVersionView> {
     return this.priceBook.getVersion(id);
   }
 
   @Roles('owner', 'estimator')
   @Get('versions/:id/changes')
-  @ApiOkResponse({ description: 'What this version changed against the one before it' })
+  @ApiJsonResponse(200, 'PriceBookChange[]', 'What this version changed against the one before it')
   versionChanges(@Param('id') id: string): Promise<PriceBookChange[]> {
     return this.priceBook.versionChanges(id);
   }
 
   @Roles('owner', 'estimator')
   @Get('policy')
-  @ApiOkResponse({ description: 'The pricing policy in effect, with each markup as a margin' })
+  @ApiJsonResponse(
+    200,
+    'PricingPolicyView',
+    'The pricing policy in effect, with each markup as a margin',
+  )
   policy(): Promise<PricingPolicyView> {
     return this.priceBook.policy();
   }
@@ -83,15 +89,14 @@ export class PriceBookController {
   @Put('policy')
   @HttpCode(201)
   @ApiBody({ schema: savePolicyBodyDoc })
-  @ApiCreatedResponse({ description: 'The new version, with only the policy changed' })
+  @ApiJsonResponse(201, 'PriceBookVersionView', 'The new version, with only the policy changed')
   savePolicy(@Body() body: unknown, @CurrentUser() user: Principal): Promise<PriceBookVersionView> {
     return this.priceBook.savePolicy(body, user.userId);
   }
 
   @Roles('owner', 'estimator')
   @Get('export.csv')
-  @ApiProduces('text/csv')
-  @ApiOkResponse({ description: 'The book in effect today as CSV, for a spreadsheet' })
+  @ApiFileResponse('text/csv', 'The book in effect today as CSV, for a spreadsheet')
   async exportCsv(@Res({ passthrough: true }) response: Response): Promise<string> {
     const { filename, csv } = await this.priceBook.exportCsv();
     // Set only once the CSV exists, so an error still leaves as JSON.
@@ -103,7 +108,7 @@ export class PriceBookController {
   @Roles('owner')
   @Post('import')
   @ApiBody({ schema: importPriceBookBodyDoc })
-  @ApiCreatedResponse({ description: 'The new version, read from the CSV' })
+  @ApiJsonResponse(201, 'PriceBookVersionView', 'The new version, read from the CSV')
   @ApiBadRequestResponse({
     description:
       'Nothing imported; one detail per problem with `line`, `column` and `field` ("line 7, column unitCost")',
@@ -114,7 +119,11 @@ export class PriceBookController {
 
   @AnyRole()
   @Get('materials')
-  @ApiOkResponse({ description: 'The materials in effect; without unit costs for crew leads' })
+  @ApiJsonResponse(
+    200,
+    'MaterialsView',
+    'The materials in effect; without unit costs for crew leads',
+  )
   materials(@CurrentUser() user: Principal): Promise<MaterialsView> {
     return this.priceBook.materials(user.role);
   }

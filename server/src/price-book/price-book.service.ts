@@ -67,7 +67,7 @@ export class PriceBookService {
   }
 
   async current(): Promise<PriceBookVersionView> {
-    const version = await this.currentVersion();
+    const version = await this.withAuthor(await this.currentVersion());
     return toView(version, version.id);
   }
 
@@ -221,9 +221,10 @@ export class PriceBookService {
   }
 
   private async versionInForceOn(date: string): Promise<PriceBookVersion | null> {
+    // Without the author: joined under `take`, TypeORM runs two queries (the ids, then the rows), and
+    // every estimate save prices with this book (npm run bench). `current` adds the author it shows.
     const [version] = await this.versions.find({
       where: { effectiveDate: LessThanOrEqual(date) },
-      relations: { author: true },
       order: { effectiveDate: 'DESC', versionNumber: 'DESC' },
       take: 1,
     });

@@ -2,6 +2,7 @@ import { Body, Controller, Get, HttpCode, Param, Post, Res } from '@nestjs/commo
 import { ApiBearerAuth, ApiBody, ApiTags } from '@nestjs/swagger';
 import type { EstimateQuoteStatus } from '@pondwright/shared';
 import type { Response } from 'express';
+import { ApiFileResponse, ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { CurrentUser, Roles, type Principal } from '../common/decorators/auth.decorators';
 import { QuoteLinksService } from './quote-links.service';
 import { StaffQuotePdfService } from './staff-quote-pdf.service';
@@ -22,6 +23,7 @@ export class EstimateQuoteController {
   /** Body: `sendQuoteRequestSchema` (validated with the shared zod schema in the service). */
   @Post('send')
   @ApiBody({ schema: sendQuoteBodyDoc })
+  @ApiJsonResponse(201, 'EstimateQuoteStatus', 'Sent: a new link, the e-mail queued in the outbox')
   send(
     @Param('id') id: string,
     @Body() body: unknown,
@@ -31,12 +33,14 @@ export class EstimateQuoteController {
   }
 
   @Get('quote')
+  @ApiJsonResponse(200, 'EstimateQuoteStatus', 'The quote’s links, e-mails, answer and payments')
   status(@Param('id') id: string): Promise<EstimateQuoteStatus> {
     return this.links.status(id);
   }
 
   @Post('quote-links/:linkId/revoke')
   @HttpCode(200)
+  @ApiJsonResponse(200, 'EstimateQuoteStatus', 'The link no longer opens the quote')
   revoke(
     @Param('id') id: string,
     @Param('linkId') linkId: string,
@@ -46,6 +50,7 @@ export class EstimateQuoteController {
   }
 
   @Get('quote.pdf')
+  @ApiFileResponse('application/pdf', 'The quote as the homeowner sees it, as a PDF')
   async pdf(
     @Param('id') id: string,
     @CurrentUser() user: Principal,

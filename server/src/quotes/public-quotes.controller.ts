@@ -13,6 +13,7 @@ import {
 import { ApiBody, ApiTags } from '@nestjs/swagger';
 import type { CheckoutRedirect, QuoteView } from '@pondwright/shared';
 import type { Request, Response } from 'express';
+import { ApiFileResponse, ApiJsonResponse } from '../common/decorators/api-docs.decorators';
 import { Public } from '../common/decorators/auth.decorators';
 import type { RequestMeta } from './public-link';
 import { PublicLinkInterceptor } from './public-link.interceptor';
@@ -33,6 +34,7 @@ export class PublicQuotesController {
   constructor(private readonly quotes: PublicQuotesService) {}
 
   @Get()
+  @ApiJsonResponse(200, 'QuoteView', 'The quote; the first view is recorded')
   view(@Param('token') token: string, @Req() request: Request): Promise<QuoteView> {
     return this.quotes.view(token, meta(request));
   }
@@ -40,6 +42,7 @@ export class PublicQuotesController {
   /** Body: `acceptQuoteRequestSchema`. */
   @Post('accept')
   @ApiBody({ schema: acceptQuoteBodyDoc })
+  @ApiJsonResponse(200, 'QuoteView', 'Accepted with the chosen options; the deposit is due')
   @HttpCode(200)
   accept(
     @Param('token') token: string,
@@ -52,6 +55,7 @@ export class PublicQuotesController {
   /** Body: `declineQuoteRequestSchema`. */
   @Post('decline')
   @ApiBody({ schema: declineQuoteBodyDoc })
+  @ApiJsonResponse(200, 'QuoteView', 'Declined, with the homeowner’s reason if given')
   @HttpCode(200)
   decline(
     @Param('token') token: string,
@@ -63,16 +67,19 @@ export class PublicQuotesController {
 
   @Post('checkout')
   @HttpCode(200)
+  @ApiJsonResponse(200, 'CheckoutRedirect', 'The payment provider’s checkout page for the deposit')
   checkout(@Param('token') token: string): Promise<CheckoutRedirect> {
     return this.quotes.checkout(token);
   }
 
   @Get('pdf')
+  @ApiFileResponse('application/pdf', 'The quote as a PDF')
   async pdf(@Param('token') token: string, @Res() response: Response): Promise<void> {
     sendPdf(response, await this.quotes.pdf(token));
   }
 
   @Get('logo')
+  @ApiFileResponse('image/*', 'The company’s logo (PNG or JPEG), with an ETag; 304 when unchanged')
   async logo(
     @Param('token') token: string,
     @Headers('if-none-match') ifNoneMatch: string | undefined,

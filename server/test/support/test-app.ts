@@ -3,9 +3,12 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import { randomBytes, randomInt } from 'node:crypto';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
+import { PARAMS_PROVIDER_TOKEN } from 'nestjs-pino';
+import type { DestinationStream } from 'pino';
 import { DataSource } from 'typeorm';
 import { AppModule } from '../../src/app.module';
 import { configureApp, NEST_APP_OPTIONS } from '../../src/app.setup';
+import { loggerParams } from '../../src/common/logging/logger-params';
 import { AppConfig } from '../../src/config/app-config';
 import { validateEnv } from '../../src/config/env.schema';
 
@@ -19,17 +22,27 @@ export type TestApp = {
 /**
  * The real application, wired exactly as in production, against the test database. `env` overrides
  * settings for this app only (the environment itself is read once, when the config module loads), e.g.
- * the port of a fake SMTP server the test started.
+ * the port of a fake SMTP server the test started. `logDestination` receives the app's JSON log lines
+ * (with the production logger settings) instead of standard output.
  */
-export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+export async function createTestApp(
+  env: Record<string, string> = {},
+  options: { logDestination?: DestinationStream } = {},
+): Promise<TestApp> {
   const settings = validateEnv({ ...process.env, ...env });
   const config = new AppConfig({
     get: (key: keyof typeof settings) => settings[key],
   } as unknown as ConstructorParameters<typeof AppConfig>[0]);
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
+  let builder = Test.createTestingModule({ imports: [AppModule] })
     .overrideProvider(AppConfig)
-    .useValue(config)
-    .compile();
+    .useValue(config);
+  if (options.logDestination) {
+    const params = loggerParams(config);
+    builder = builder
+      .overrideProvider(PARAMS_PROVIDER_TOKEN)
+      .useValue({ ...params, pinoHttp: [params.pinoHttp, options.logDestination] });
+  }
+  const moduleRef = await builder.compile();
   const app = moduleRef.createNestApplication<NestExpressApplication>({
     ...NEST_APP_OPTIONS,
     logger: false,

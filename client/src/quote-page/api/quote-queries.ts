@@ -6,6 +6,7 @@ import type {
 } from '@pondwright/shared';
 import {
   QueryClient,
+  queryOptions,
   useMutation,
   useQuery,
   useQueryClient,
@@ -30,14 +31,20 @@ export function createQuoteQueryClient(): QueryClient {
   return new QueryClient({ defaultOptions: quoteQueryDefaults });
 }
 
-/** `GET /api/quotes/:token`; `pollEvery` says how often to check again (while a payment is confirmed). */
+/** `GET /api/quotes/:token`. */
+export const quoteQueryOptions = (token: string) =>
+  queryOptions({
+    queryKey: quoteKey(token),
+    queryFn: ({ signal }) => quoteRequest<QuoteView>(token, '', { signal }),
+  });
+
+/** The quote; `pollEvery` says how often to check again (while a payment is confirmed). */
 export function useQuote(
   token: string,
   pollEvery: (view: QuoteView | undefined) => number | false = () => false,
 ) {
   return useQuery({
-    queryKey: quoteKey(token),
-    queryFn: ({ signal }) => quoteRequest<QuoteView>(token, '', { signal }),
+    ...quoteQueryOptions(token),
     refetchInterval: (query) => pollEvery(query.state.data),
   });
 }

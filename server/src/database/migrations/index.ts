@@ -13,6 +13,7 @@ import { ChangeOrderCredits1796122800000 } from './1796122800000-change-order-cr
 import { OutboxRetries1796126400000 } from './1796126400000-outbox-retries';
 import { QuoteTerms1796130000000 } from './1796130000000-quote-terms';
 import { QuoteTokenFailures1796133600000 } from './1796133600000-quote-token-failures';
+import { EstimatesListOrder1796137200000 } from './1796137200000-estimates-list-order';
 
 /** Every migration, oldest first. A new migration is added here as well as in its own file. */
 export const migrations = [
@@ -31,4 +32,5 @@ export const migrations = [
   OutboxRetries1796126400000,
   QuoteTerms1796130000000,
   QuoteTokenFailures1796133600000,
+  EstimatesListOrder1796137200000,
 ];
