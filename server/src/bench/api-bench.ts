@@ -4,7 +4,11 @@ import { cpus, loadavg } from 'node:os';
 import { Client } from 'pg';
 import { DataSource } from 'typeorm';
 import { validateDatabaseEnv } from '../config/env.schema';
-import { databaseSettingsFromEnv, dataSourceOptions } from '../database/data-source-options';
+import {
+  databaseSettingsFromEnv,
+  dataSourceOptions,
+  type DatabaseSettings,
+} from '../database/data-source-options';
 import { alternateRounds } from './alternate-rounds';
 import { includes, parseOptions, type BenchOptions } from './bench-options';
 import { freePort, startServer, stopServers, type BenchServer } from './bench-processes';
@@ -37,7 +41,7 @@ import { nothingLost, SaveLedger, type SaveCount } from './save-ledger';
 
 const READ_CONNECTIONS = 50;
 const SAVE_CONNECTIONS = 10;
-/** Raised for the bench only: all load comes from one address, which the real limits would refuse. */
+/** Raised for the bench only: each simulated user sends far more a minute than a person does. */
 const RAISED_LIMITS = { RATE_LIMIT_PER_MINUTE: '1000000000', LOGIN_MAX_FAILURES: '1000000' };
 
 /**
@@ -64,64 +68,12 @@ async function main(): Promise<void> {
         ? 'reused (the marker matched; --reseed rebuilds)'
         : `seeded now in ${seededSeconds.toFixed(0)} s`;
 
-    const jwtSecret = randomBytes(32).toString('base64url');
-    const databaseEnv = {
-      DB_HOST: settings.host,
-      DB_PORT: String(settings.port),
-      DB_USER: settings.username,
-      DB_PASSWORD: settings.password,
-      DB_NAME: settings.database,
-      DB_POOL_SIZE: String(settings.poolSize),
-    };
-    const [realPort, baselinePort] = [await freePort(), await freePort()];
     log('starting the real server and the baseline…');
-    const [real, baseline] = await Promise.all([
-      startServer('real server', 'main.js', realPort, {
-        ...databaseEnv,
-        ...RAISED_LIMITS,
-        // Production settings, as deployed; the provider keys are placeholders no bench route uses.
-        NODE_ENV: 'production',
-        HOST: '127.0.0.1',
-        PORT: String(realPort),
-        PUBLIC_APP_URL: `http://127.0.0.1:${realPort}`,
-        JWT_SECRET: jwtSecret,
-        OUTBOX_WORKER: 'off',
-        // Behind one proxy, as deployed: each simulated user sends its own X-Forwarded-For address.
-        TRUST_PROXY: 'true',
-        LOG_LEVEL: 'info',
-        STRIPE_SECRET_KEY: 'sk_test_bench_not_used',
-        STRIPE_WEBHOOK_SECRET: 'whsec_bench_not_used',
-        S3_ACCESS_KEY_ID: 'bench-not-used',
-        S3_SECRET_ACCESS_KEY: 'bench-not-used',
-      }),
-      startServer('baseline', 'bench/baseline-server.js', baselinePort, {
-        ...databaseEnv,
-        BASELINE_PORT: String(baselinePort),
-        JWT_SECRET: jwtSecret,
-      }),
-    ]);
+    const { real, baseline } = await startServers(settings);
     const signIn = () => signInAs(real, fixture.estimator);
     const session: Session = { token: await signIn() };
     const answers = await compareAnswers(baseline, real, fixture, session.token);
-
-    const header = [
-      `Pondwright API bench, ${new Date().toISOString().slice(0, 16)}Z`,
-      `machine   ${cpus().length} CPUs (${cpus()[0]?.model ?? 'unknown'}), load average ${loadavg()
-        .map((load) => load.toFixed(2))
-        .join(
-          ' ',
-        )} at start; Node ${process.version}; PostgreSQL on ${settings.host}:${settings.port}`,
-      `          server, baseline, PostgreSQL and the load generator share these CPUs`,
-      `data      ${ESTIMATE_COUNT.toLocaleString('en-US')} estimates × ${LINES_PER_ESTIMATE} lines in one company, database ${settings.database}: ${seeded}`,
-      `real      server/dist/main.js, NODE_ENV=production, DB_POOL_SIZE=${settings.poolSize}, request log at info (discarded), OUTBOX_WORKER=off`,
-      `          rate limits raised for the bench: RATE_LIMIT_PER_MINUTE=${RAISED_LIMITS.RATE_LIMIT_PER_MINUTE} (default 600 a minute per address)`,
-      `          and LOGIN_MAX_FAILURES=${RAISED_LIMITS.LOGIN_MAX_FAILURES} (default 10); the wrong-quote-token limit is untouched (no wrong tokens are sent)`,
-      `          TRUST_PROXY=true: each connection is a user with its own X-Forwarded-For address (10.77.x.y)`,
-      `baseline  node:http + pg, pool ${settings.poolSize}, same routes by plain SQL, no framework or request log`,
-      ...answers.map((line) => `          ${line}`),
-      `load      autocannon, no pipelining, ${options.warmupSeconds} s warm-up per server, then ${options.rounds} rounds × ${options.roundSeconds} s alternating baseline/real; medians`,
-    ];
-    for (const line of header) console.log(line);
+    for (const line of setupLines(settings, options, seeded, answers)) console.log(line);
 
     const rows: RouteRow[] = [];
     const goals: Goal[] = [];
@@ -207,6 +159,76 @@ async function main(): Promise<void> {
     stopServers();
     await dataSource.destroy();
   }
+}
+
+/**
+ * The real server (production settings; the provider keys are placeholders no benched route uses) and
+ * the baseline, each on a free port with the same database, pool size and signing key.
+ */
+async function startServers(
+  settings: DatabaseSettings,
+): Promise<{ real: BenchServer; baseline: BenchServer }> {
+  const jwtSecret = randomBytes(32).toString('base64url');
+  const databaseEnv = {
+    DB_HOST: settings.host,
+    DB_PORT: String(settings.port),
+    DB_USER: settings.username,
+    DB_PASSWORD: settings.password,
+    DB_NAME: settings.database,
+    DB_POOL_SIZE: String(settings.poolSize),
+  };
+  const [realPort, baselinePort] = [await freePort(), await freePort()];
+  const [real, baseline] = await Promise.all([
+    startServer('real server', 'main.js', realPort, {
+      ...databaseEnv,
+      ...RAISED_LIMITS,
+      NODE_ENV: 'production',
+      HOST: '127.0.0.1',
+      PORT: String(realPort),
+      PUBLIC_APP_URL: `http://127.0.0.1:${realPort}`,
+      JWT_SECRET: jwtSecret,
+      OUTBOX_WORKER: 'off',
+      // Behind one proxy, as deployed: each simulated user sends its own X-Forwarded-For address.
+      TRUST_PROXY: 'true',
+      LOG_LEVEL: 'info',
+      STRIPE_SECRET_KEY: 'sk_test_bench_not_used',
+      STRIPE_WEBHOOK_SECRET: 'whsec_bench_not_used',
+      S3_ACCESS_KEY_ID: 'bench-not-used',
+      S3_SECRET_ACCESS_KEY: 'bench-not-used',
+    }),
+    startServer('baseline', 'bench/baseline-server.js', baselinePort, {
+      ...databaseEnv,
+      BASELINE_PORT: String(baselinePort),
+      JWT_SECRET: jwtSecret,
+    }),
+  ]);
+  return { real, baseline };
+}
+
+/** What was measured, where and how: printed before the figures, so a pasted table keeps its context. */
+function setupLines(
+  settings: DatabaseSettings,
+  options: BenchOptions,
+  seeded: string,
+  answers: string[],
+): string[] {
+  const load = loadavg()
+    .map((value) => value.toFixed(2))
+    .join(' ');
+  const cpu = `${cpus().length} CPUs (${cpus()[0]?.model ?? 'unknown'})`;
+  return [
+    `Pondwright API bench, ${new Date().toISOString().slice(0, 16)}Z`,
+    `machine   ${cpu}, load average ${load} at start; Node ${process.version}`,
+    `          server, baseline, PostgreSQL (${settings.host}:${settings.port}) and the load generator share these CPUs`,
+    `data      ${ESTIMATE_COUNT.toLocaleString('en-US')} estimates × ${LINES_PER_ESTIMATE} lines in one company, database ${settings.database}: ${seeded}`,
+    `real      server/dist/main.js, NODE_ENV=production, DB_POOL_SIZE=${settings.poolSize}, request log at info (discarded), OUTBOX_WORKER=off`,
+    `          rate limits raised for the bench: RATE_LIMIT_PER_MINUTE=${RAISED_LIMITS.RATE_LIMIT_PER_MINUTE} (default 600 a minute per address)`,
+    `          and LOGIN_MAX_FAILURES=${RAISED_LIMITS.LOGIN_MAX_FAILURES} (default 10); the wrong-quote-token limit is untouched (no wrong tokens are sent)`,
+    `          TRUST_PROXY=true: each connection is a user with its own X-Forwarded-For address (10.77.x.y)`,
+    `baseline  node:http + pg, pool ${settings.poolSize}, same routes by plain SQL, no framework or request log`,
+    ...answers.map((line) => `          ${line}`),
+    `load      autocannon, no pipelining, ${options.warmupSeconds} s warm-up per server, then ${options.rounds} rounds × ${options.roundSeconds} s alternating baseline/real; medians`,
+  ];
 }
 
 /** Saving a 30-line draft at 10 at once, each connection on its own estimate; then counts what stuck. */
@@ -324,21 +346,31 @@ function mixedLines(mixed: MixedFigures): string[] {
   ];
 }
 
+/**
+ * Signs in for a fresh access token. A server still working off the last load's requests may answer
+ * 503 (no pooled connection within two seconds): it is given up to half a minute to catch up.
+ */
 async function signInAs(
   server: BenchServer,
   person: { email: string; password: string },
 ): Promise<string> {
-  const response = await fetch(`${server.url}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify(person),
-  });
-  if (!response.ok) throw new Error(`Signing in as ${person.email} answered ${response.status}`);
-  return ((await response.json()) as { accessToken: string }).accessToken;
+  let status = 0;
+  for (let attempt = 0; attempt < 15; attempt++) {
+    if (attempt > 0) await new Promise((resolve) => setTimeout(resolve, 2_000));
+    const response = await fetch(`${server.url}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify(person),
+    });
+    if (response.ok) return ((await response.json()) as { accessToken: string }).accessToken;
+    status = response.status;
+    if (status < 500) break;
+  }
+  throw new Error(`Signing in as ${person.email} answered ${status}`);
 }
 
 /** The bench database is the bench's own; it is created on first use. */
-async function ensureDatabase(settings: ReturnType<typeof databaseSettingsFromEnv>): Promise<void> {
+async function ensureDatabase(settings: DatabaseSettings): Promise<void> {
   if (!/^pondwright_bench\w*$/.test(settings.database)) {
     throw new Error(
       `The bench rebuilds its database: name it pondwright_bench…, not ${settings.database}`,
