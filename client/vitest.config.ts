@@ -12,7 +12,8 @@ export default defineConfig({
     css: false,
     restoreMocks: true,
     unstubGlobals: true,
-    // jsdom with typed input is slow on a loaded 2-core machine; these tests check behaviour, not speed.
-    testTimeout: 20_000,
+    // jsdom with typed input is slow on a loaded 2-core machine (the takeoff workspace took over 20 s
+    // at a load average of 7); these tests check behaviour, not speed.
+    testTimeout: 40_000,
   },
 });
