@@ -342,6 +342,7 @@ function mixedLines(mixed: MixedFigures): string[] {
     `  ${mixed.load.responses} responses, ${rate(mixed.load.requestsPerSecond)} req/s, p50 ${mixed.load.p50Ms.toFixed(1)} ms, p95 ${mixed.load.p95Ms.toFixed(1)} ms, p99 ${mixed.load.p99Ms.toFixed(1)} ms`,
     `  statuses: ${describeStatuses(mixed.load)}${mixed.failures.length ? `; failed: ${mixed.failures.map(([key, n]) => `${key}×${n}`).join(', ')}` : ''}`,
     `  RSS after warm-up ${mb(mixed.rssStartMb)}, at the end ${mb(mixed.rssEndMb)}, highest sample ${mb(mixed.rssMaxMb)}`,
+    `  RSS median of the first fifth of the run ${mb(mixed.rssFirstFifthMb)}, of the last fifth ${mb(mixed.rssLastFifthMb)} (samples every 5 s)`,
     `  server process CPU ${mixed.serverCpuPct === null ? '?' : `${mixed.serverCpuPct.toFixed(0)} %`} of one core over the run`,
   ];
 }

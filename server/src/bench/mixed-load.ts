@@ -14,7 +14,7 @@ import {
   type Session,
 } from './bench-routes';
 import type { BenchEstimateRef, BenchFixture } from './bench-seed';
-import { runLoad, type LoadFigures } from './load-runner';
+import { median, runLoad, type LoadFigures } from './load-runner';
 import { SaveLedger, type SaveCount } from './save-ledger';
 
 export const MIXED_USERS = 50;
@@ -32,6 +32,12 @@ export type MixedFigures = {
   rssStartMb: number | null;
   rssEndMb: number | null;
   rssMaxMb: number | null;
+  /**
+   * The median of the samples in the first and in the last fifth of the run. A single sample swings by
+   * a third as V8 grows and gives back its young generation, so these show a trend better.
+   */
+  rssFirstFifthMb: number | null;
+  rssLastFifthMb: number | null;
   /** The server process's CPU over the run, in % of one core (Node.js runs JavaScript on one). */
   serverCpuPct: number | null;
   saves: SaveCount;
@@ -84,10 +90,10 @@ export async function mixedLoad(args: {
   tally.clear();
   await ledger.open();
   const rssStartMb = rssMb(real.child);
-  let rssMaxMb = rssStartMb;
+  const samples: number[] = rssStartMb === null ? [] : [rssStartMb];
   const sampler = setInterval(() => {
     const now = rssMb(real.child);
-    if (now !== null && (rssMaxMb === null || now > rssMaxMb)) rssMaxMb = now;
+    if (now !== null) samples.push(now);
   }, RSS_SAMPLE_MS);
   const renew = setInterval(() => {
     args.signIn().then(
@@ -105,6 +111,8 @@ export async function mixedLoad(args: {
       requestsFor,
     });
     const rssEndMb = rssMb(real.child);
+    if (rssEndMb !== null) samples.push(rssEndMb);
+    const fifth = Math.max(1, Math.floor(samples.length / 5));
     const cpuAfter = cpuMs(real.child);
     const serverCpuPct =
       cpuBefore === null || cpuAfter === null
@@ -120,7 +128,9 @@ export async function mixedLoad(args: {
       failures,
       rssStartMb,
       rssEndMb,
-      rssMaxMb,
+      rssMaxMb: samples.length ? Math.max(...samples) : null,
+      rssFirstFifthMb: samples.length ? median(samples.slice(0, fifth)) : null,
+      rssLastFifthMb: samples.length ? median(samples.slice(-fifth)) : null,
       serverCpuPct,
       saves: await ledger.close(saved),
     };
