@@ -28,11 +28,8 @@ import { PaymentsModule } from './payments/payments.module';
 import { QuotesModule } from './quotes/quotes.module';
 import { PriceBookModule } from './price-book/price-book.module';
 import { PricedTakeoffsModule } from './priced-takeoffs/priced-takeoffs.module';
-import {
-  clientDistDir,
-  QUOTE_PAGE_ROUTE,
-  QuotePageHostModule,
-} from './quote-page-host/quote-page-host.module';
+import { clientStaticFiles } from './quote-page-host/client-static-files';
+import { clientDistDir, QuotePageHostModule } from './quote-page-host/quote-page-host.module';
 import { TakeoffModule } from './takeoff/takeoff.module';
 import { UsersModule } from './users/users.module';
 
@@ -79,9 +76,7 @@ import { UsersModule } from './users/users.module';
       inject: [AppConfig],
       useFactory: (config: AppConfig) => {
         const rootPath = clientDistDir(config);
-        return existsSync(rootPath)
-          ? [{ rootPath, exclude: ['/api/{*rest}', QUOTE_PAGE_ROUTE] }]
-          : [];
+        return existsSync(rootPath) ? [clientStaticFiles(rootPath)] : [];
       },
     }),
     QuotePageHostModule,

@@ -5,6 +5,7 @@ import cookieParser from 'cookie-parser';
 import { json, raw } from 'express';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
+import { compressAnswers } from './common/http/compress-answers';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { createValidationPipe } from './common/validation/validation-pipe';
 import { AppConfig } from './config/app-config';
@@ -44,6 +45,7 @@ export function configureApp(app: NestExpressApplication): void {
   app.use(json({ limit: '1mb' }));
   app.use(errors.middleware);
   app.use(cookieParser());
+  app.use(compressAnswers());
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -2,7 +2,7 @@ import { Global, Module } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { NestFactory } from '@nestjs/core';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
@@ -10,13 +10,19 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AppConfig } from '../config/app-config';
 import { PublicQuotesService } from '../quotes/public-quotes.service';
 import { WrongTokenThrottle } from '../quotes/wrong-token-throttle.service';
-import { QUOTE_PAGE_ROUTE, QuotePageHostModule } from './quote-page-host.module';
+import { compressAnswers } from '../common/http/compress-answers';
+import { clientStaticFiles } from './client-static-files';
+import { QuotePageHostModule } from './quote-page-host.module';
 
 // A built client of two pages, served as app.module serves it: the staff app's index.html for page
 // paths, quote.html for `/q/<token>`, and `/api` left to the API.
 const dist = mkdtempSync(join(tmpdir(), 'pondwright-dist-'));
 writeFileSync(join(dist, 'index.html'), '<!doctype html><title>staff app</title>');
 writeFileSync(join(dist, 'quote.html'), '<!doctype html><title>quote page</title>');
+// A built script, large enough to be worth compressing (the middleware leaves answers under 1 KB).
+const SCRIPT = Array.from({ length: 400 }, (_, i) => `export const line${i} = ${i};`).join('\n');
+mkdirSync(join(dist, 'assets'));
+writeFileSync(join(dist, 'assets', 'quote-3f9c2a1b.js'), SCRIPT);
 
 // The wrong-token count, in memory: the real one (PostgreSQL) is tested in quote-link-hardening.
 const WRONG_TOKENS_ALLOWED = 3;
@@ -51,11 +57,7 @@ class ConfigStub {}
 // As in app.module. Built with NestFactory as main.ts does: ServeStaticModule picks its Express loader
 // when the module is created, so a testing module (created before its HTTP adapter) would serve nothing.
 @Module({
-  imports: [
-    ConfigStub,
-    ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*rest}', QUOTE_PAGE_ROUTE] }),
-    QuotePageHostModule,
-  ],
+  imports: [ConfigStub, ServeStaticModule.forRoot(clientStaticFiles(dist)), QuotePageHostModule],
 })
 class HostedClient {}
 
@@ -64,6 +66,7 @@ let app: NestExpressApplication;
 beforeAll(async () => {
   app = await NestFactory.create<NestExpressApplication>(HostedClient, { logger: false });
   app.setGlobalPrefix('api');
+  app.use(compressAnswers());
   await app.init();
 });
 
@@ -109,5 +112,22 @@ describe('the quote page host', () => {
     expect(staff.text).toContain('staff app');
     const api = await request(app.getHttpServer()).get('/api/quotes/qt_unknown').expect(404);
     expect(api.text).not.toContain('quote page');
+  });
+
+  it('sends hashed scripts compressed and cacheable for a year, and index.html checked on every load', async () => {
+    const script = await request(app.getHttpServer())
+      .get('/assets/quote-3f9c2a1b.js')
+      .set('Accept-Encoding', 'gzip')
+      .expect(200);
+    expect(script.headers['content-encoding']).toBe('gzip');
+    expect(script.text).toBe(SCRIPT);
+    expect(script.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    const plain = await request(app.getHttpServer())
+      .get('/assets/quote-3f9c2a1b.js')
+      .set('Accept-Encoding', 'identity')
+      .expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    const index = await request(app.getHttpServer()).get('/').expect(200);
+    expect(index.headers['cache-control']).toBe('no-cache');
   });
 });
