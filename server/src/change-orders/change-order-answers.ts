@@ -14,6 +14,7 @@ import { money, quoteAnsweredStaffMail } from '../quotes/quote-mail';
 import { User } from '../users/entities/user.entity';
 import { ChangeOrder } from './entities/change-order.entity';
 import { amountPaid, isInvoiced, supersedingChange } from './job-contract';
+import { lookUpTogether } from '../database/look-up-together';
 
 type Answer =
   | {
@@ -100,9 +101,9 @@ export class ChangeOrderAnswers {
           : { reason: answer.reason ?? null }),
       },
     });
-    const [estimate, sender] = await Promise.all([
-      manager.findOneByOrFail(Estimate, { id: job.estimateId }),
-      manager.findOneByOrFail(User, { id: link.createdById }),
+    const [estimate, sender] = await lookUpTogether(manager, [
+      () => manager.findOneByOrFail(Estimate, { id: job.estimateId }),
+      () => manager.findOneByOrFail(User, { id: link.createdById }),
     ]);
     await this.outbox.enqueue(manager, {
       companyId: job.companyId,

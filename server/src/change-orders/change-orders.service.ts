@@ -40,6 +40,7 @@ import { User } from '../users/entities/user.entity';
 import { changeOrderMail } from './change-order-mail';
 import { ChangeOrder } from './entities/change-order.entity';
 import { amountPaid, isInvoiced, supersedingChange, versionInForce } from './job-contract';
+import { lookUpTogether } from '../database/look-up-together';
 
 const LINK_DAYS = 30;
 
@@ -237,10 +238,10 @@ export class ChangeOrdersService {
         createdById: actorId,
       });
       await manager.update(ChangeOrder, { id: order.id }, { status: 'sent' });
-      const [estimate, company, sender] = await Promise.all([
-        manager.findOneByOrFail(Estimate, { id: job.estimateId }),
-        manager.findOneByOrFail(Company, { id: job.companyId }),
-        manager.findOneByOrFail(User, { id: actorId }),
+      const [estimate, company, sender] = await lookUpTogether(manager, [
+        () => manager.findOneByOrFail(Estimate, { id: job.estimateId }),
+        () => manager.findOneByOrFail(Company, { id: job.companyId }),
+        () => manager.findOneByOrFail(User, { id: actorId }),
       ]);
       await this.outbox.enqueue(manager, {
         companyId: job.companyId,
@@ -269,12 +270,13 @@ export class ChangeOrdersService {
   }
 
   private async view(manager: EntityManager, order: ChangeOrder): Promise<ChangeOrderView> {
-    const [version, link] = await Promise.all([
-      manager.findOneByOrFail(EstimateVersion, { id: order.versionId }),
-      manager.findOne(QuoteLink, {
-        where: { changeOrderId: order.id },
-        order: { createdAt: 'DESC' },
-      }),
+    const [version, link] = await lookUpTogether(manager, [
+      () => manager.findOneByOrFail(EstimateVersion, { id: order.versionId }),
+      () =>
+        manager.findOne(QuoteLink, {
+          where: { changeOrderId: order.id },
+          order: { createdAt: 'DESC' },
+        }),
     ]);
     const cost = sumDecimals([
       ...order.budgetLines.map((line) => toDecimal(line.extendedCost)),

@@ -12,6 +12,7 @@ import { OutboxService } from '../mail/outbox.service';
 import type { CreateInviteDto } from './dto/create-invite.dto';
 import { inviteMail } from './invite-mail';
 import { Invite } from './entities/invite.entity';
+import { lookUpTogether } from '../database/look-up-together';
 
 /** Single-use, expiring invitations. The token is shown once (in the link) and stored only hashed. */
 @Injectable()
@@ -67,9 +68,9 @@ export class InvitesService {
         { revokedAt: new Date() },
       );
       const stored = await this.invites.save(invite, manager);
-      const [company, inviter] = await Promise.all([
-        manager.findOneByOrFail(Company, { id: stored.companyId }),
-        manager.findOneByOrFail(User, { id: invitedById }),
+      const [company, inviter] = await lookUpTogether(manager, [
+        () => manager.findOneByOrFail(Company, { id: stored.companyId }),
+        () => manager.findOneByOrFail(User, { id: invitedById }),
       ]);
       await this.outbox.enqueue(manager, {
         companyId: stored.companyId,

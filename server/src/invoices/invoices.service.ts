@@ -20,6 +20,7 @@ import { recordEstimateEvent } from '../quotes/estimate-events';
 import { User } from '../users/entities/user.entity';
 import { Invoice } from './entities/invoice.entity';
 import { invoiceMail } from './invoice-mail';
+import { lookUpTogether } from '../database/look-up-together';
 
 /** How long the homeowner's invoice link works. */
 const INVOICE_LINK_DAYS = 60;
@@ -101,10 +102,10 @@ export class InvoicesService {
         invoiceId: invoice.id,
         createdById: actorId,
       });
-      const [estimate, company, sender] = await Promise.all([
-        manager.findOneByOrFail(Estimate, { id: job.estimateId }),
-        manager.findOneByOrFail(Company, { id: job.companyId }),
-        manager.findOneByOrFail(User, { id: actorId }),
+      const [estimate, company, sender] = await lookUpTogether(manager, [
+        () => manager.findOneByOrFail(Estimate, { id: job.estimateId }),
+        () => manager.findOneByOrFail(Company, { id: job.companyId }),
+        () => manager.findOneByOrFail(User, { id: actorId }),
       ]);
       await this.outbox.enqueue(manager, {
         companyId: job.companyId,

@@ -28,6 +28,7 @@ import { findCompanyJob } from './find-job';
 import { budgetFromAcceptance } from './job-budget';
 import { JobLogsService } from './job-logs.service';
 import { plannedEnd } from './working-days';
+import { lookUpTogether } from '../database/look-up-together';
 
 /** Which status may follow which, and who may make the move. */
 const NEXT_STATUS: Record<JobStatus, { next: JobStatus; roles: Role[] } | null> = {
@@ -176,14 +177,15 @@ export class JobsService {
   async get(id: string, role: Role): Promise<JobView> {
     const manager = this.dataSource.manager;
     const job = await this.findJob(id, manager);
-    const [[row], changes, logs] = await Promise.all([
-      manager.query(`${JOB_SELECT} WHERE j.id = $1`, [job.id]) as Promise<JobRow[]>,
-      manager.find(JobScheduleChange, {
-        where: { jobId: job.id },
-        relations: { fromCrew: true, toCrew: true, actor: true },
-        order: { createdAt: 'ASC' },
-      }),
-      this.logs.list(job.id),
+    const [[row], changes, logs] = await lookUpTogether(manager, [
+      () => manager.query(`${JOB_SELECT} WHERE j.id = $1`, [job.id]) as Promise<JobRow[]>,
+      () =>
+        manager.find(JobScheduleChange, {
+          where: { jobId: job.id },
+          relations: { fromCrew: true, toCrew: true, actor: true },
+          order: { createdAt: 'ASC' },
+        }),
+      () => this.logs.list(job.id),
     ]);
     const seesMoney = role !== 'crew_lead';
     return {

@@ -18,6 +18,7 @@ import { Payment } from './entities/payment.entity';
 import { Invoice } from '../invoices/entities/invoice.entity';
 import { STRIPE_CLIENT } from './stripe-client';
 import { moneyToMinorUnits } from './minor-units';
+import { lookUpTogether } from '../database/look-up-together';
 
 const PROVIDER = 'stripe';
 
@@ -267,10 +268,10 @@ export class PaymentsService {
     reference: string,
   ): Promise<void> {
     const acceptance = await manager.findOneByOrFail(QuoteAcceptance, { id: payment.acceptanceId });
-    const [company, customer, link] = await Promise.all([
-      manager.findOneByOrFail(Company, { id: estimate.companyId }),
-      manager.findOneByOrFail(Customer, { id: estimate.customerId }),
-      manager.findOneByOrFail(QuoteLink, { id: acceptance.linkId }),
+    const [company, customer, link] = await lookUpTogether(manager, [
+      () => manager.findOneByOrFail(Company, { id: estimate.companyId }),
+      () => manager.findOneByOrFail(Customer, { id: estimate.customerId }),
+      () => manager.findOneByOrFail(QuoteLink, { id: acceptance.linkId }),
     ]);
     const sender = await manager.findOneByOrFail(User, { id: link.createdById });
     const common = {

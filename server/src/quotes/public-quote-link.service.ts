@@ -24,6 +24,7 @@ import type { RequestMeta } from './public-link';
 import { quoteAcceptedHomeownerMail, quoteAnsweredStaffMail, money } from './quote-mail';
 import { termsOfLink } from './quote-terms';
 import { CONSENT_TEXT, quoteTermsShown } from './quote-view';
+import { lookUpTogether } from '../database/look-up-together';
 
 /**
  * What the homeowner does through the quote's own link: accept or decline the estimate's version, then
@@ -241,9 +242,9 @@ async function lockAnswerable(manager: EntityManager, link: QuoteLink): Promise<
 }
 
 async function companyAndSender(manager: EntityManager, link: QuoteLink) {
-  const [company, sender] = await Promise.all([
-    manager.findOneByOrFail(Company, { id: link.companyId }),
-    manager.findOneByOrFail(User, { id: link.createdById }),
+  const [company, sender] = await lookUpTogether(manager, [
+    () => manager.findOneByOrFail(Company, { id: link.companyId }),
+    () => manager.findOneByOrFail(User, { id: link.createdById }),
   ]);
   return { company, sender };
 }

@@ -11,6 +11,7 @@ import { renderQuotePdf } from './quote-pdf/render-quote-pdf';
 import { acceptanceView, loadQuoteRecords, paymentView, type QuoteRecords } from './quote-records';
 import { termsOfLink } from './quote-terms';
 import { buildQuoteView } from './quote-view';
+import { lookUpTogether } from '../database/look-up-together';
 
 /**
  * The page a homeowner's link shows, whatever its kind: the quote's version, with the change order or
@@ -24,11 +25,17 @@ export async function loadPublicQuoteView(
   // at all: the page is polled while they decide, and the nine to eleven ORM look-ups in two to four
   // rounds it used to make each cost several times the CPU of a plain query (npm run bench). An open
   // quote now needs no more; the answers and the deposit are read once there are any.
-  const [version, { answered, ...names }, changeOrder, invoice] = await Promise.all([
-    manager.findOneByOrFail(EstimateVersion, { id: link.versionId }),
-    quotePageNames(manager, link),
-    link.changeOrderId ? manager.findOneByOrFail(ChangeOrder, { id: link.changeOrderId }) : null,
-    link.invoiceId ? manager.findOneByOrFail(Invoice, { id: link.invoiceId }) : null,
+  const [version, { answered, ...names }, changeOrder, invoice] = await lookUpTogether(manager, [
+    () => manager.findOneByOrFail(EstimateVersion, { id: link.versionId }),
+    () => quotePageNames(manager, link),
+    () =>
+      link.changeOrderId
+        ? manager.findOneByOrFail(ChangeOrder, { id: link.changeOrderId })
+        : Promise.resolve(null),
+    () =>
+      link.invoiceId
+        ? manager.findOneByOrFail(Invoice, { id: link.invoiceId })
+        : Promise.resolve(null),
   ]);
   const records: QuoteRecords = answered
     ? await loadQuoteRecords(manager, link.estimateId)
@@ -132,10 +139,10 @@ export async function renderPublicQuotePdf(
   manager: EntityManager,
   link: QuoteLink,
 ): Promise<{ filename: string; bytes: Buffer }> {
-  const [view, logo, estimate] = await Promise.all([
-    loadPublicQuoteView(manager, link),
-    manager.findOneBy(CompanyLogo, { companyId: link.companyId }),
-    manager.findOneByOrFail(Estimate, { id: link.estimateId }),
+  const [view, logo, estimate] = await lookUpTogether(manager, [
+    () => loadPublicQuoteView(manager, link),
+    () => manager.findOneBy(CompanyLogo, { companyId: link.companyId }),
+    () => manager.findOneByOrFail(Estimate, { id: link.estimateId }),
   ]);
   const bytes = await renderQuotePdf(view, {
     logo: logo ? { bytes: logo.bytes, contentType: logo.contentType } : null,

@@ -26,6 +26,7 @@ import { recordEstimateEvent } from './estimate-events';
 import { quoteSentMail } from './quote-mail';
 import { acceptanceView, loadQuoteRecords, staffPaymentView } from './quote-records';
 import { currentQuoteTerms } from './quote-terms';
+import { lookUpTogether } from '../database/look-up-together';
 
 /** Statuses from which the latest version may be sent (again). */
 const SENDABLE: ReadonlyArray<EstimateStatus> = [
@@ -76,10 +77,10 @@ export class QuoteLinksService {
       );
       const token = newSecureToken();
       const expiresAt = new Date(now.getTime() + request.expiresInDays * 86_400_000);
-      const [company, customer, sender] = await Promise.all([
-        manager.findOneByOrFail(Company, { id: estimate.companyId }),
-        manager.findOneByOrFail(Customer, { id: estimate.customerId }),
-        manager.findOneByOrFail(User, { id: actorId }),
+      const [company, customer, sender] = await lookUpTogether(manager, [
+        () => manager.findOneByOrFail(Company, { id: estimate.companyId }),
+        () => manager.findOneByOrFail(Customer, { id: estimate.customerId }),
+        () => manager.findOneByOrFail(User, { id: actorId }),
       ]);
       const link = await manager.save(
         manager.create(QuoteLink, {
@@ -162,13 +163,14 @@ export class QuoteLinksService {
   async status(estimateId: string): Promise<EstimateQuoteStatus> {
     const manager = this.dataSource.manager;
     const estimate = await findEstimate(manager, estimateId, this.tenant.companyId);
-    const [links, records] = await Promise.all([
-      manager.find(QuoteLink, {
-        where: { estimateId: estimate.id, companyId: estimate.companyId },
-        relations: { version: true, createdBy: true },
-        order: { createdAt: 'DESC' },
-      }),
-      loadQuoteRecords(manager, estimate.id),
+    const [links, records] = await lookUpTogether(manager, [
+      () =>
+        manager.find(QuoteLink, {
+          where: { estimateId: estimate.id, companyId: estimate.companyId },
+          relations: { version: true, createdBy: true },
+          order: { createdAt: 'DESC' },
+        }),
+      () => loadQuoteRecords(manager, estimate.id),
     ]);
     const emails = await this.quoteEmails(
       manager,

@@ -7,6 +7,7 @@ import type { EntityManager } from 'typeorm';
 import { Payment } from '../payments/entities/payment.entity';
 import { QuoteAcceptance } from './entities/quote-acceptance.entity';
 import { QuoteDecline } from './entities/quote-decline.entity';
+import { lookUpTogether } from '../database/look-up-together';
 
 /** The homeowner's answers and the deposit of one estimate, as stored. */
 export type QuoteRecords = {
@@ -19,13 +20,14 @@ export async function loadQuoteRecords(
   manager: EntityManager,
   estimateId: string,
 ): Promise<QuoteRecords> {
-  const [acceptance, decline, payments] = await Promise.all([
-    manager.findOneBy(QuoteAcceptance, { estimateId }),
-    manager.findOne(QuoteDecline, { where: { estimateId }, order: { declinedAt: 'DESC' } }),
-    manager.find(Payment, {
-      where: { estimateId, purpose: 'deposit' },
-      order: { createdAt: 'DESC' },
-    }),
+  const [acceptance, decline, payments] = await lookUpTogether(manager, [
+    () => manager.findOneBy(QuoteAcceptance, { estimateId }),
+    () => manager.findOne(QuoteDecline, { where: { estimateId }, order: { declinedAt: 'DESC' } }),
+    () =>
+      manager.find(Payment, {
+        where: { estimateId, purpose: 'deposit' },
+        order: { createdAt: 'DESC' },
+      }),
   ]);
   // A paid deposit wins over later unpaid attempts (a homeowner may open checkout twice).
   const payment = payments.find((p) => p.status === 'paid') ?? payments[0] ?? null;

@@ -1,4 +1,5 @@
 import 'reflect-metadata';
+import { afterAll, expect } from 'vitest';
 import { randomBytes } from 'node:crypto';
 
 // The server's settings for tests: the test database, a fresh random signing key, quiet logs, and
@@ -12,3 +13,15 @@ process.env.LOG_LEVEL = 'silent';
 process.env.RATE_LIMIT_PER_MINUTE = '100000';
 process.env.PUBLIC_APP_URL = 'http://app.test';
 process.env.OUTBOX_WORKER = 'off';
+
+// pg 8 queues a query sent to a connection still busy with another (a Promise.all inside a
+// transaction) and warns once; pg 9 refuses it. Any test file that makes the server do so fails.
+const busyConnectionWarnings: string[] = [];
+process.on('warning', (warning) => {
+  if (warning.message.includes('already executing a query')) {
+    busyConnectionWarnings.push(warning.stack ?? warning.message);
+  }
+});
+afterAll(() => {
+  expect(busyConnectionWarnings, 'a query was sent to a busy connection').toEqual([]);
+});
