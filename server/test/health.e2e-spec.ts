@@ -36,7 +36,11 @@ describe('GET /api/health', () => {
       // An ordinary route: 503 JSON with the request id, in well under the 2 s connection timeout
       // plus a margin for this loaded machine; never a hang and never a 500.
       const listStarted = Date.now();
-      const list = await testApp.http().get('/api/estimates').set(...bearer(owner)).expect(503);
+      const list = await testApp
+        .http()
+        .get('/api/estimates')
+        .set(...bearer(owner))
+        .expect(503);
       expect(Date.now() - listStarted).toBeLessThan(3000);
       expect(list.body).toMatchObject({ statusCode: 503, error: 'Service Unavailable' });
       expect(list.body.requestId).toMatch(/^[0-9a-f-]{36}$/);
@@ -53,7 +57,11 @@ describe('GET /api/health', () => {
     const up = await testApp.http().get('/api/health').expect(200);
     expect(up.body).toEqual({ status: 'ok' });
     await testApp.http().get('/api/health/ready').expect(200);
-    await testApp.http().get('/api/estimates').set(...bearer(owner)).expect(200);
+    await testApp
+      .http()
+      .get('/api/estimates')
+      .set(...bearer(owner))
+      .expect(200);
   });
 
   it('keeps a caller’s plain request id and replaces one that could forge a log line', async () => {

@@ -64,11 +64,7 @@ describe('the public quote link', () => {
       .set('X-Forwarded-For', guesser)
       .expect(429);
     expect(blocked.body.message).toMatch(/Too many links that do not exist/);
-    await testApp
-      .http()
-      .get(`/api/quotes/${token}`)
-      .set('X-Forwarded-For', guesser)
-      .expect(429);
+    await testApp.http().get(`/api/quotes/${token}`).set('X-Forwarded-For', guesser).expect(429);
 
     // The homeowner, elsewhere, is not affected.
     await testApp.http().get(`/api/quotes/${token}`).set('X-Forwarded-For', address()).expect(200);

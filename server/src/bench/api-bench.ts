@@ -195,6 +195,9 @@ async function startServers(
       STRIPE_WEBHOOK_SECRET: 'whsec_bench_not_used',
       S3_ACCESS_KEY_ID: 'bench-not-used',
       S3_SECRET_ACCESS_KEY: 'bench-not-used',
+      // The outbox worker is off: no mail is sent.
+      SMTP_HOST: '127.0.0.1',
+      MAIL_FROM: 'Bench <bench@bench.example>',
     }),
     startServer('baseline', 'bench/baseline-server.js', baselinePort, {
       ...databaseEnv,

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { DatabaseSettings } from '../database/data-source-options';
-import type { Env } from './env.schema';
+import { LOCAL_FAKE_SMTP_HOST, type Env } from './env.schema';
 
 /** Typed, read-only access to the validated settings. Nothing else reads process.env. */
 @Injectable()
@@ -68,7 +68,7 @@ export class AppConfig {
   }
   get smtp() {
     return {
-      host: this.get('SMTP_HOST'),
+      host: this.get('SMTP_HOST') ?? LOCAL_FAKE_SMTP_HOST,
       port: this.get('SMTP_PORT'),
       secure: this.get('SMTP_SECURE'),
       user: this.get('SMTP_USER'),

@@ -55,7 +55,7 @@ describe('production settings', () => {
     NODE_ENV: 'production',
   };
 
-  it('refuses the local fakes’ payment settings and a missing public address', () => {
+  it('refuses the local fakes’ payment and mail settings and a missing public address', () => {
     let message = '';
     try {
       validateEnv({ ...base, STRIPE_API_URL: 'http://127.0.0.1:12111' });
@@ -67,6 +67,8 @@ describe('production settings', () => {
       'STRIPE_WEBHOOK_SECRET',
       'STRIPE_API_URL',
       'PUBLIC_APP_URL',
+      'SMTP_HOST',
+      'MAIL_FROM',
     ]) {
       expect(message).toContain(name);
     }
@@ -81,6 +83,7 @@ describe('production settings', () => {
       STRIPE_WEBHOOK_SECRET: 'whsec_example_only',
       PUBLIC_APP_URL: 'https://ponds.example',
       SMTP_HOST: 'smtp.example',
+      MAIL_FROM: 'Heron Moss Ponds <quotes@ponds.example>',
     });
     expect(env.SMTP_HOST).toBe('smtp.example');
     expect(env.STRIPE_API_URL).toBeUndefined();

@@ -15,6 +15,10 @@ const LOCAL_FAKE_STRIPE_KEY = 'sk_test_pondwright_local_fake';
 const LOCAL_FAKE_WEBHOOK_SECRET = 'whsec_pondwright_local_fake';
 /** The fixed key pair the local fake S3 store (s3rver) accepts. */
 const LOCAL_FAKE_S3_KEY = 'S3RVER';
+/** A sender on a reserved domain: fine for the local fake, undeliverable from a real mail server. */
+const LOCAL_MAIL_FROM = 'Pondwright <no-reply@pondwright.example>';
+/** Where the local fake SMTP server listens when SMTP_HOST is unset. */
+export const LOCAL_FAKE_SMTP_HOST = '127.0.0.1';
 
 export const envSchema = databaseEnvSchema
   .extend({
@@ -50,7 +54,8 @@ export const envSchema = databaseEnvSchema
     DB_REPLICA_PORT: z.coerce.number().int().min(1).max(65535).optional(),
     CLIENT_DIST_DIR: z.string().optional(),
     // E-mail: nodemailer over SMTP. `npm start` and `npm test` point these at the local fake SMTP server.
-    SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+    // Unset means the local fake on 127.0.0.1 (refused in production below).
+    SMTP_HOST: z.string().min(1).optional(),
     SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
     SMTP_SECURE: z
       .enum(['true', 'false'])
@@ -58,7 +63,7 @@ export const envSchema = databaseEnvSchema
       .transform((value) => value === 'true'),
     SMTP_USER: z.string().min(1).optional(),
     SMTP_PASSWORD: z.string().min(1).optional(),
-    MAIL_FROM: z.string().min(3).default('Pondwright <no-reply@pondwright.example>'),
+    MAIL_FROM: z.string().min(3).default(LOCAL_MAIL_FROM),
     /** The fake SMTP server's HTTP API, read by the developer mailbox page; ignored in production. */
     MAILBOX_URL: z.url().optional(),
     OUTBOX_WORKER: z
@@ -108,6 +113,10 @@ export const envSchema = databaseEnvSchema
       refuse('S3_ACCESS_KEY_ID', 'Set the photo store’s access key');
     if (env.S3_SECRET_ACCESS_KEY === LOCAL_FAKE_S3_KEY)
       refuse('S3_SECRET_ACCESS_KEY', 'Set the photo store’s secret key');
+    if (!env.SMTP_HOST)
+      refuse('SMTP_HOST', 'Set the mail server quotes and invitations are sent through');
+    if (env.MAIL_FROM === LOCAL_MAIL_FROM)
+      refuse('MAIL_FROM', 'Set a sender address on a domain the mail server may send for');
     if (!env.PUBLIC_APP_URL)
       refuse('PUBLIC_APP_URL', 'Set the address people reach the app at (quote links use it)');
   });

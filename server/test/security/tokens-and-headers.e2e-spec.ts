@@ -263,7 +263,8 @@ describe('request bodies', () => {
 describe('security headers in production', () => {
   it('add HSTS, upgrade-insecure-requests and Secure cookies in production', async () => {
     // What production requires besides NODE_ENV (server/src/config/env.schema.ts): the real provider's
-    // keys, the photo store's own keys, no fake payment API, and the public address.
+    // keys, the photo store's own keys, no fake payment API, a mail server and sender, and the public
+    // address.
     const production = await createTestApp({
       NODE_ENV: 'production',
       PUBLIC_APP_URL: 'https://app.pondwright.example',
@@ -271,6 +272,8 @@ describe('security headers in production', () => {
       STRIPE_WEBHOOK_SECRET: 'whsec_headers_spec_only',
       S3_ACCESS_KEY_ID: 'headers-spec-access-key',
       S3_SECRET_ACCESS_KEY: 'headers-spec-secret-key',
+      SMTP_HOST: '127.0.0.1',
+      MAIL_FROM: 'Headers Spec <quotes@headers-spec.example>',
     });
     try {
       const response = await production.http().get('/api/health/live').expect(200);
