@@ -8,7 +8,7 @@ import type {
 } from '@pondwright/shared';
 import { examplePondInput } from '@pondwright/shared/engine';
 import type { PriceBook } from '@pondwright/shared/pricing';
-import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { randomBytes, randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import { approvedEstimate, tokenFromMail } from '../support/quote-fixtures';
 import {
@@ -167,6 +167,11 @@ export async function buildWorld(
     .set(...bearer(owner))
     .attach('logo', logo, { filename: 'logo.png', contentType: 'image/png' })
     .expect(200);
+  // The stored logo is re-encoded (metadata stripped), so its fingerprint is the stored one.
+  const [{ sha256: logoSha256 }] = (await testApp.dataSource.query(
+    'SELECT sha256 FROM company_logos WHERE company_id = $1',
+    [owner.companyId],
+  )) as [{ sha256: string }];
 
   const current = await send<{ book: PriceBook }>(testApp, owner, 'get', '/api/price-book', 200);
   const [first] = current.book.materials;
@@ -336,7 +341,7 @@ export async function buildWorld(
       estimator.email,
       crewLead.email,
       teamMember.email,
-      createHash('sha256').update(logo).digest('hex'),
+      logoSha256,
     ],
     spares: null,
   };
