@@ -1,5 +1,5 @@
 import { examplePondInput as typicalPond } from '@pondwright/shared/engine';
-import type { EstimateView, ManualLine } from '@pondwright/shared';
+import { ESTIMATE_VIEW_EVENT_LIMIT, type EstimateView, type ManualLine } from '@pondwright/shared';
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addMember, bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
@@ -505,5 +505,50 @@ describe('estimates', () => {
       [other.companyId],
     );
     expect(count).toBe(0);
+  });
+
+  it('sends the latest 50 audit entries with the estimate and the whole log on its own route', async () => {
+    const owner = await signupCompany(testApp);
+    const customerId = await addCustomer(owner.companyId);
+    let estimate = await createEstimate(owner, customerId);
+    const saves = ESTIMATE_VIEW_EVENT_LIMIT + 5;
+    for (let save = 1; save <= saves; save++) {
+      const response = await saveDraft(
+        owner,
+        estimate.id,
+        draftBody(estimate, { notes: `Visit ${save}` }),
+      ).expect(200);
+      estimate = response.body as EstimateView;
+    }
+
+    // One 'created' and one 'draft-saved' per save.
+    expect(estimate.eventCount).toBe(saves + 1);
+    expect(estimate.events).toHaveLength(ESTIMATE_VIEW_EVENT_LIMIT);
+    expect(estimate.events.at(-1)).toMatchObject({
+      action: 'draft-saved',
+      detail: { revision: saves + 1 },
+    });
+    expect(estimate.events[0]).toMatchObject({
+      detail: { revision: saves + 2 - ESTIMATE_VIEW_EVENT_LIMIT },
+    });
+
+    const all = await testApp
+      .http()
+      .get(`/api/estimates/${estimate.id}/events`)
+      .set(...bearer(owner))
+      .expect(200);
+    const log = all.body as EstimateView['events'];
+    expect(log).toHaveLength(saves + 1);
+    expect(log[0]).toMatchObject({ action: 'created' });
+    expect(log.map((event) => Number(event.id))).toEqual(
+      [...log.map((event) => Number(event.id))].sort((a, b) => a - b),
+    );
+    expect(log.slice(-ESTIMATE_VIEW_EVENT_LIMIT)).toEqual(estimate.events);
+
+    await testApp
+      .http()
+      .get('/api/estimates/00000000-0000-4000-8000-000000000000/events')
+      .set(...bearer(owner))
+      .expect(404);
   });
 });

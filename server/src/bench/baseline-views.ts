@@ -1,5 +1,6 @@
 import {
   DEFAULT_QUOTE_TERMS,
+  ESTIMATE_VIEW_EVENT_LIMIT,
   type EstimateComputed,
   type EstimateContent,
   type EstimateListPage,
@@ -58,6 +59,7 @@ type EstimateRow = {
     detail: Record<string, unknown>;
     createdAt: string;
   }>;
+  event_count: number;
   job_id: string | null;
 };
 
@@ -79,12 +81,16 @@ export async function estimateView(
                     ORDER BY v.version_number), '[]')
              FROM estimate_versions v LEFT JOIN users vu ON vu.id = v.finalised_by
              WHERE v.estimate_id = e.id) AS versions,
-            (SELECT coalesce(json_agg(json_build_object(
-                      'id', ev.id::text, 'action', ev.action,
-                      'actorName', coalesce(au.name, ev.actor_label, ''),
-                      'detail', ev.detail, 'createdAt', ev.created_at) ORDER BY ev.id), '[]')
-             FROM estimate_events ev LEFT JOIN users au ON au.id = ev.actor_id
-             WHERE ev.estimate_id = e.id AND ev.company_id = e.company_id) AS events,
+            (SELECT coalesce(json_agg(latest.event ORDER BY latest.id), '[]')
+             FROM (SELECT ev.id, json_build_object(
+                            'id', ev.id::text, 'action', ev.action,
+                            'actorName', coalesce(au.name, ev.actor_label, ''),
+                            'detail', ev.detail, 'createdAt', ev.created_at) AS event
+                   FROM estimate_events ev LEFT JOIN users au ON au.id = ev.actor_id
+                   WHERE ev.estimate_id = e.id AND ev.company_id = e.company_id
+                   ORDER BY ev.id DESC LIMIT ${ESTIMATE_VIEW_EVENT_LIMIT}) latest) AS events,
+            (SELECT count(*)::int FROM estimate_events ev
+             WHERE ev.estimate_id = e.id AND ev.company_id = e.company_id) AS event_count,
             (SELECT j.id FROM jobs j WHERE j.estimate_id = e.id) AS job_id
      FROM (${STAFF}) me
      JOIN estimates e ON e.company_id = me.company_id AND e.id = $3
@@ -120,6 +126,7 @@ export async function estimateView(
     })),
     jobId: row.job_id,
     events: row.events.map((event) => ({ ...event, createdAt: iso(event.createdAt) })),
+    eventCount: row.event_count,
   };
 }
 

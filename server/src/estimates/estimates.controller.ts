@@ -9,6 +9,7 @@ import {
 import type {
   ApprovalQueueItem,
   EstimateComparison,
+  EstimateEventView,
   EstimateListPage,
   EstimateVersionView,
   EstimateView,
@@ -54,6 +55,12 @@ export class EstimatesController {
   @ApiJsonResponse(200, 'EstimateView', 'The estimate with its working draft and versions')
   get(@Param('id') id: string): Promise<EstimateView> {
     return this.estimates.get(id);
+  }
+
+  @Get(':id/events')
+  @ApiJsonResponse(200, 'EstimateEventView[]', 'The whole audit log, oldest first')
+  events(@Param('id') id: string): Promise<EstimateEventView[]> {
+    return this.estimates.events(id);
   }
 
   @Put(':id/draft')

@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import {
   createEstimateRequestSchema,
   ESTIMATE_STATUSES,
+  ESTIMATE_VIEW_EVENT_LIMIT,
   finaliseEstimateRequestSchema,
   saveDraftRequestSchema,
   sendBackEstimateRequestSchema,
@@ -218,6 +219,15 @@ export class EstimatesService {
       : null;
     if (!estimate) throw new AppError('NOT_FOUND', 'Estimate not found');
     return estimate;
+  }
+
+  /** The whole audit log, oldest first (the estimate's view carries only the latest entries). */
+  async events(id: string): Promise<EstimateEventView[]> {
+    const events = isUuid(id)
+      ? await estimateEvents(this.dataSource.manager, id, this.tenant.companyId)
+      : null;
+    if (!events) throw new AppError('NOT_FOUND', 'Estimate not found');
+    return events;
   }
 
   /**
@@ -584,13 +594,15 @@ async function estimateView(
              LEFT JOIN users vu ON vu.id = v.finalised_by
              CROSS JOIN LATERAL (SELECT v.computed #> '{priced,totals}' AS totals OFFSET 0) t
              WHERE v.estimate_id = e.id) AS versions,
-            (SELECT coalesce(json_agg(json_build_object(
-                      'id', ev.id::text, 'action', ev.action,
-                      'actorName', coalesce(au.name, ev.actor_label, ''),
-                      'detail', ev.detail, 'createdAt', ev.created_at) ORDER BY ev.id), '[]')
-             FROM estimate_events ev
-             LEFT JOIN users au ON au.id = ev.actor_id
-             WHERE ev.estimate_id = e.id AND ev.company_id = e.company_id) AS events
+            (SELECT coalesce(json_agg(latest.event ORDER BY latest.id), '[]')
+             FROM (SELECT ev.id, ${EVENT_JSON} AS event
+                   FROM estimate_events ev
+                   LEFT JOIN users au ON au.id = ev.actor_id
+                   WHERE ev.estimate_id = e.id AND ev.company_id = e.company_id
+                   ORDER BY ev.id DESC
+                   LIMIT ${ESTIMATE_VIEW_EVENT_LIMIT}) latest) AS events,
+            (SELECT count(*)::int FROM estimate_events ev
+             WHERE ev.estimate_id = e.id AND ev.company_id = e.company_id) AS event_count
      FROM estimates e
      JOIN customers c ON c.id = e.customer_id
      JOIN estimate_drafts d ON d.estimate_id = e.id
@@ -616,6 +628,7 @@ async function estimateView(
     job_id: string | null;
     versions: EstimateVersionSummary[];
     events: EstimateEventView[];
+    event_count: number;
   }>;
   if (!row) return null;
   // json_agg writes times as text with microseconds; the API sends ISO strings with milliseconds.
@@ -644,7 +657,34 @@ async function estimateView(
     })),
     jobId: row.job_id,
     events: row.events.map((event) => ({ ...event, createdAt: iso(event.createdAt) })),
+    eventCount: row.event_count,
   };
+}
+
+/** One audit-log entry as JSON, naming its actor (`ev` the event, `au` its actor). */
+const EVENT_JSON = `json_build_object(
+  'id', ev.id::text, 'action', ev.action, 'actorName', coalesce(au.name, ev.actor_label, ''),
+  'detail', ev.detail, 'createdAt', ev.created_at)`;
+
+/** The whole audit log of one estimate of the company, oldest first; null when it has no such estimate. */
+async function estimateEvents(
+  manager: EntityManager,
+  id: string,
+  companyId: string,
+): Promise<EstimateEventView[] | null> {
+  const rows = (await manager.query(
+    `SELECT ${EVENT_JSON} AS event
+     FROM estimates e
+     LEFT JOIN estimate_events ev ON ev.estimate_id = e.id AND ev.company_id = e.company_id
+     LEFT JOIN users au ON au.id = ev.actor_id
+     WHERE e.id = $1 AND e.company_id = $2
+     ORDER BY ev.id`,
+    [id, companyId],
+  )) as Array<{ event: EstimateEventView & { id: string | null } }>;
+  if (rows.length === 0) return null;
+  return rows
+    .filter((row) => row.event.id !== null)
+    .map(({ event }) => ({ ...event, createdAt: new Date(event.createdAt).toISOString() }));
 }
 
 function versionSummary(version: EstimateVersion): EstimateVersionSummary {

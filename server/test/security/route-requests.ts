@@ -128,6 +128,7 @@ export const ROUTE_SPECS: Readonly<Record<string, RouteSpec>> = {
     listQueries: (victim) => [`?search=${victim.tag}`, '?status=accepted'],
   },
   'EstimatesController.get': {},
+  'EstimatesController.events': {},
   'EstimatesController.saveDraft': { body: draftBody },
   'EstimatesController.finalise': { body: () => ({ revision: 1 }) },
   'EstimatesController.getVersion': {},

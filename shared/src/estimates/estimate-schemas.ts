@@ -161,6 +161,9 @@ export type EstimateVersionView = EstimateVersionSummary & {
   priceBookVersionId: string;
 };
 
+/** How many of the latest audit-log entries an estimate's view carries (see `EstimateView.events`). */
+export const ESTIMATE_VIEW_EVENT_LIMIT = 50;
+
 export type EstimateEventView = {
   id: string;
   action: string;
@@ -199,7 +202,14 @@ export type EstimateView = {
   updatedAt: string;
   draft: EstimateDraftView;
   versions: EstimateVersionSummary[];
+  /**
+   * The audit log's latest `ESTIMATE_VIEW_EVENT_LIMIT` entries, oldest first. An estimate saved all
+   * day would otherwise send its whole history with every open and every save;
+   * `GET /api/estimates/:id/events` has all of it.
+   */
   events: EstimateEventView[];
+  /** How many entries the audit log holds in all. */
+  eventCount: number;
   /** The job made from this estimate once accepted; null until then. */
   jobId: string | null;
 };

@@ -77,7 +77,7 @@ function EstimateBuilder({ estimate }: { estimate: EstimateView }) {
         </Tabs.Panel>
         <Tabs.Panel value="history">
           <Paper p="md">
-            <EstimateTimeline events={estimate.events} />
+            <EstimateTimeline estimate={estimate} />
           </Paper>
         </Tabs.Panel>
       </Tabs>

@@ -1,5 +1,7 @@
-import { Text, Timeline } from '@mantine/core';
-import type { EstimateEventView } from '@pondwright/shared';
+import { Alert, Button, Group, Text, Timeline } from '@mantine/core';
+import type { EstimateEventView, EstimateView } from '@pondwright/shared';
+import { useState } from 'react';
+import { useEstimateEvents } from '../api/get-estimate-events';
 
 const ACTION_LABELS: Record<string, string> = {
   created: 'Started the estimate',
@@ -29,8 +31,47 @@ function describe(detail: Record<string, unknown>): string {
     .join(' · ');
 }
 
-/** The estimate's audit log, newest last, as the server recorded it. */
-export function EstimateTimeline({ events }: { events: EstimateEventView[] }) {
+/**
+ * The estimate's audit log, newest last, as the server recorded it. The estimate carries only its
+ * latest entries; the older ones are fetched when asked for.
+ */
+export function EstimateTimeline({
+  estimate,
+}: {
+  estimate: Pick<EstimateView, 'id' | 'events' | 'eventCount'>;
+}) {
+  const [showAll, setShowAll] = useState(false);
+  const older = estimate.eventCount - estimate.events.length;
+  const all = useEstimateEvents(estimate.id, showAll && older > 0);
+  const events = showAll && all.data ? all.data : estimate.events;
+  return (
+    <>
+      {older > 0 && !(showAll && all.data) && (
+        <Group justify="space-between" mb="md">
+          <Text size="sm" c="dimmed">
+            Showing the latest {estimate.events.length} of {estimate.eventCount} entries.
+          </Text>
+          <Button
+            variant="light"
+            size="xs"
+            loading={all.isFetching}
+            onClick={() => setShowAll(true)}
+          >
+            Show all {estimate.eventCount}
+          </Button>
+        </Group>
+      )}
+      {all.isError && (
+        <Alert color="red" mb="md">
+          The older entries could not be loaded. Try again in a moment.
+        </Alert>
+      )}
+      <EventList events={events} />
+    </>
+  );
+}
+
+function EventList({ events }: { events: EstimateEventView[] }) {
   return (
     <Timeline active={events.length - 1} bulletSize={14} lineWidth={2} aria-label="History">
       {events.map((event) => (
