@@ -1,19 +1,20 @@
-import { Container, Divider, Paper, Stack, Title } from '@mantine/core';
 import { quoteSelectionTotals, type QuoteView } from '@pondwright/shared';
 import { useCallback, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { useQuote } from './api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from './api/quote-request';
-import { AcceptForm } from './components/accept-form';
-import { AcceptedPanel, DeclinedPanel } from './components/answer-panels';
 import {
+  AcceptedPanel,
+  AcceptForm,
   ChangeAnsweredPanel,
   ChangeOrderSection,
-  creditAmount,
-  isCredit,
-} from './components/change-order';
-import { DeclineForm } from './components/decline-form';
-import { InvoiceSection } from './components/invoice-section';
-import { PaymentPanel } from './components/payment-panel';
+  DeclinedPanel,
+  DeclineForm,
+  InvoiceSection,
+  PaymentPanel,
+  QuoteLinkGone,
+  QuoteLoadFailed,
+  QuoteNotFound,
+} from './components/deferred-parts';
 import { PriceSection } from './components/price-section';
 import {
   DrawingsSection,
@@ -26,16 +27,13 @@ import {
   ScopeSection,
   TermsSection,
 } from './components/quote-sections';
-import {
-  QuoteLinkGone,
-  QuoteLoadFailed,
-  QuoteLoading,
-  QuoteNotFound,
-} from './components/status-pages';
+import { QuoteLoading } from './components/quote-loading';
 import { PaymentScheduleSection, StickySummary, type ChosenTotals } from './components/totals';
+import { creditAmount, isCredit } from './lib/change-order';
 import { formatMoney } from './lib/format';
 import { linkKind } from './lib/link-kind';
 import { subtractMoney } from './lib/money';
+import { PartBoundary } from './ui/deferred';
 import { paymentReturnFrom, tokenFromPath, type PaymentReturn } from './lib/location';
 
 const ACCEPT_ID = 'accept-quote';
@@ -52,14 +50,20 @@ type QuotePageProps = {
 /** `/q/<token>`: the homeowner's quote, from loading to paid. */
 export function QuotePage({ pathname, search, pollMs = 2000, pollForMs = 60_000 }: QuotePageProps) {
   const token = tokenFromPath(pathname);
-  if (!token) return <QuoteNotFound />;
   return (
-    <QuoteScreen
-      token={token}
-      paymentReturn={paymentReturnFrom(search)}
-      pollMs={pollMs}
-      pollForMs={pollForMs}
-    />
+    // Parts that lead the page wait here, in the loading state, for their code.
+    <PartBoundary fallback={<QuoteLoading />}>
+      {token ? (
+        <QuoteScreen
+          token={token}
+          paymentReturn={paymentReturnFrom(search)}
+          pollMs={pollMs}
+          pollForMs={pollForMs}
+        />
+      ) : (
+        <QuoteNotFound />
+      )}
+    </PartBoundary>
   );
 }
 
@@ -205,143 +209,147 @@ function QuoteDocument({
         : ids.filter((id) => id !== optionId),
     );
   const money = (amount: string) => formatMoney(amount, view.currency);
+  // An answer given here shows the answered parts next: fetch them now, so the page does not fall
+  // back to its loading state for a moment after "Accept" or "Decline".
+  useEffect(() => {
+    // On failure the panel asks again when it renders.
+    if (open || changeOpen) AcceptedPanel.preload().catch(() => undefined);
+  }, [open, changeOpen]);
 
   return (
-    <Container size={720} px="xs" py="md">
-      <Stack gap="md">
-        <QuoteHeader view={view} token={token} />
-        <Stack gap="md" component="main">
-          <QuoteTitle view={view} token={token} kind={kind} />
-          {change && (
-            <>
-              <ChangeOrderSection
-                view={view}
-                change={change}
-                answerHref={changeOpen ? `#${ACCEPT_ID}` : undefined}
-              />
-              <ChangeAnsweredPanel view={view} change={change} focus={answeredHere} />
-            </>
-          )}
-          {invoice && (
-            <InvoiceSection
+    <div className="qp-container qp-stack">
+      <QuoteHeader view={view} token={token} />
+      <main className="qp-stack">
+        <QuoteTitle view={view} token={token} kind={kind} />
+        {change && (
+          <>
+            <ChangeOrderSection
               view={view}
-              invoice={invoice}
-              token={token}
-              paymentReturn={paymentReturn}
-              confirming={confirming}
-              waitedOut={waitedOut}
-              onCheckAgain={onCheckAgain}
+              change={change}
+              answerHref={changeOpen ? `#${ACCEPT_ID}` : undefined}
             />
-          )}
-          {kind === 'quote' && view.state === 'accepted' && (
-            <AcceptedPanel
-              view={view}
-              totals={totals}
-              focus={answeredHere}
-              payment={
-                <PaymentPanel
-                  view={view}
-                  token={token}
-                  paymentReturn={paymentReturn}
-                  confirming={confirming}
-                  waitedOut={waitedOut}
-                  onCheckAgain={onCheckAgain}
-                />
-              }
-            />
-          )}
-          {kind === 'quote' && view.state === 'declined' && (
-            <DeclinedPanel view={view} focus={answeredHere} />
-          )}
-          <HighlightsSection view={view} />
-          <ScopeSection view={view} />
-          <IncludedSection view={view} />
-          <DrawingsSection view={view} />
-          <PriceSection
+            <ChangeAnsweredPanel view={view} change={change} focus={answeredHere} />
+          </>
+        )}
+        {invoice && (
+          <InvoiceSection
             view={view}
-            chosenIds={shownIds}
-            onToggle={open ? toggle : undefined}
-            title={change ? 'Project price with this change' : undefined}
+            invoice={invoice}
+            token={token}
+            paymentReturn={paymentReturn}
+            confirming={confirming}
+            waitedOut={waitedOut}
+            onCheckAgain={onCheckAgain}
           />
-          {open && <StickySummary view={view} totals={totals} acceptHref={`#${ACCEPT_ID}`} />}
-          {kind === 'quote' && view.state !== 'declined' && (
-            <PaymentScheduleSection
-              view={view}
-              totals={totals}
-              depositPaid={view.payment?.status === 'paid'}
-            />
-          )}
-          {/* The final invoice recalls the acceptance read-only; its figures are above. */}
-          {invoice && view.acceptance && (
-            <AcceptedPanel view={view} totals={totals} focus={false} invoiced />
-          )}
-          <TermsSection view={view} />
-          <SafetySection view={view} />
-          {open && (
-            <AnswerCard
-              title="Accept this quote"
-              accept={
-                <AcceptForm
-                  view={view}
-                  token={token}
-                  optionIds={live.optionIds}
-                  summary={
+        )}
+        {kind === 'quote' && view.state === 'accepted' && (
+          <AcceptedPanel
+            view={view}
+            totals={totals}
+            focus={answeredHere}
+            payment={
+              <PaymentPanel
+                view={view}
+                token={token}
+                paymentReturn={paymentReturn}
+                confirming={confirming}
+                waitedOut={waitedOut}
+                onCheckAgain={onCheckAgain}
+              />
+            }
+          />
+        )}
+        {kind === 'quote' && view.state === 'declined' && (
+          <DeclinedPanel view={view} focus={answeredHere} />
+        )}
+        <HighlightsSection view={view} />
+        <ScopeSection view={view} />
+        <IncludedSection view={view} />
+        <DrawingsSection view={view} />
+        <PriceSection
+          view={view}
+          chosenIds={shownIds}
+          onToggle={open ? toggle : undefined}
+          title={change ? 'Project price with this change' : undefined}
+        />
+        {open && <StickySummary view={view} totals={totals} acceptHref={`#${ACCEPT_ID}`} />}
+        {kind === 'quote' && view.state !== 'declined' && (
+          <PaymentScheduleSection
+            view={view}
+            totals={totals}
+            depositPaid={view.payment?.status === 'paid'}
+          />
+        )}
+        {/* The final invoice recalls the acceptance read-only; its figures are above. */}
+        {invoice && view.acceptance && (
+          <AcceptedPanel view={view} totals={totals} focus={false} invoiced />
+        )}
+        <TermsSection view={view} />
+        <SafetySection view={view} />
+        {open && (
+          <AnswerCard
+            title="Accept this quote"
+            accept={
+              <AcceptForm
+                view={view}
+                token={token}
+                optionIds={live.optionIds}
+                summary={
+                  <>
+                    Your total is <strong>{money(totals.total)}</strong> with the options you
+                    ticked. After you accept, you can pay the deposit of{' '}
+                    <strong>{money(totals.deposit)}</strong> online.
+                  </>
+                }
+                onAccepted={() => setAnsweredHere(true)}
+              />
+            }
+            decline={
+              <DeclineForm view={view} token={token} onDeclined={() => setAnsweredHere(true)} />
+            }
+          />
+        )}
+        {change && changeOpen && (
+          <AnswerCard
+            title="Accept this change"
+            accept={
+              <AcceptForm
+                view={view}
+                token={token}
+                subject="change"
+                optionIds={[]}
+                summary={
+                  isCredit(change) ? (
                     <>
-                      Your total is <strong>{money(totals.total)}</strong> with the options you
-                      ticked. After you accept, you can pay the deposit of{' '}
-                      <strong>{money(totals.deposit)}</strong> online.
+                      This change is a credit of <strong>{money(creditAmount(change))}</strong>, tax
+                      included, and brings your project to{' '}
+                      <strong>{money(change.newJobTotal)}</strong>. It comes off the balance due
+                      when the work is finished.
                     </>
-                  }
-                  onAccepted={() => setAnsweredHere(true)}
-                />
-              }
-              decline={
-                <DeclineForm view={view} token={token} onDeclined={() => setAnsweredHere(true)} />
-              }
-            />
-          )}
-          {change && changeOpen && (
-            <AnswerCard
-              title="Accept this change"
-              accept={
-                <AcceptForm
-                  view={view}
-                  token={token}
-                  subject="change"
-                  optionIds={[]}
-                  summary={
-                    isCredit(change) ? (
-                      <>
-                        This change is a credit of <strong>{money(creditAmount(change))}</strong>,
-                        tax included, and brings your project to{' '}
-                        <strong>{money(change.newJobTotal)}</strong>. It comes off the balance due
-                        when the work is finished.
-                      </>
-                    ) : (
-                      <>
-                        This change adds <strong>{money(change.total)}</strong>, tax included, and
-                        brings your project to <strong>{money(change.newJobTotal)}</strong>. There’s
-                        nothing to pay now: it’s added to the balance due when the work is finished.
-                      </>
-                    )
-                  }
-                  onAccepted={() => setAnsweredHere(true)}
-                />
-              }
-              decline={
-                <DeclineForm
-                  view={view}
-                  token={token}
-                  subject="change"
-                  onDeclined={() => setAnsweredHere(true)}
-                />
-              }
-            />
-          )}
-        </Stack>
-        <QuoteFooter view={view} token={token} kind={kind} />
-      </Stack>
-    </Container>
+                  ) : (
+                    <>
+                      This change adds <strong>{money(change.total)}</strong>, tax included, and
+                      brings your project to <strong>{money(change.newJobTotal)}</strong>. There’s
+                      nothing to pay now: it’s added to the balance due when the work is finished.
+                    </>
+                  )
+                }
+                onAccepted={() => setAnsweredHere(true)}
+              />
+            }
+            decline={
+              <DeclineForm
+                view={view}
+                token={token}
+                subject="change"
+                onDeclined={() => setAnsweredHere(true)}
+              />
+            }
+          />
+        )}
+      </main>
+      <QuoteFooter view={view} token={token} kind={kind} />
+    </div>
   );
 }
 
@@ -356,17 +364,20 @@ function AnswerCard({
   decline: ReactNode;
 }) {
   return (
-    <Paper component="section" p="md" id={ACCEPT_ID} aria-labelledby={`${ACCEPT_ID}-title`}>
-      <Stack gap="lg">
-        <div>
-          <Title order={2} fz="h4" id={`${ACCEPT_ID}-title`} mb="sm">
-            {title}
-          </Title>
-          {accept}
-        </div>
-        <Divider />
-        {decline}
-      </Stack>
-    </Paper>
+    <section
+      className="qp-card qp-stack"
+      data-gap="lg"
+      id={ACCEPT_ID}
+      aria-labelledby={`${ACCEPT_ID}-title`}
+    >
+      <div>
+        <h2 className="qp-h4 qp-card-title" id={`${ACCEPT_ID}-title`}>
+          {title}
+        </h2>
+        {accept}
+      </div>
+      <hr className="qp-divider" />
+      {decline}
+    </section>
   );
 }

@@ -1,9 +1,12 @@
-import { Alert, Button, Checkbox, Stack, Text, TextInput } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
 import { useRef, useState, type FormEvent, type ReactNode } from 'react';
 import { useAcceptQuote, useRefreshQuote } from '../api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
 import { browser } from '../lib/browser';
+import { Alert } from '../ui/alert';
+import { Button } from '../ui/button';
+import { CheckboxField } from '../ui/checkbox-field';
+import { TextField } from '../ui/text-fields';
 
 // The same words as `acceptQuoteRequestSchema`, checked here by hand so zod stays out of the bundle.
 const NAME_MESSAGE = 'Type your full name';
@@ -136,12 +139,12 @@ export function AcceptForm({
 
   return (
     <form onSubmit={submit} noValidate aria-label={words.form}>
-      <Stack gap="md">
-        <Text>{summary}</Text>
-        <TextInput
+      <div className="qp-stack">
+        <p>{summary}</p>
+        <TextField
           ref={nameInput}
           label="Your full name"
-          description={words.nameHint}
+          hint={words.nameHint}
           autoComplete="name"
           required
           value={fullName}
@@ -152,7 +155,7 @@ export function AcceptForm({
           error={errors.fullName}
           maxLength={160}
         />
-        <Checkbox
+        <CheckboxField
           ref={consentInput}
           label={words.consent}
           checked={consent}
@@ -161,7 +164,6 @@ export function AcceptForm({
             if (errors.consent) setErrors((e) => ({ ...e, consent: undefined }));
           }}
           error={errors.consent}
-          aria-invalid={errors.consent ? true : undefined}
           required
         />
         {problem && (
@@ -169,23 +171,23 @@ export function AcceptForm({
             ref={problemBox}
             tabIndex={-1}
             role="alert"
-            color={problem.kind === 'version' ? 'clay' : 'red'}
+            tone={problem.kind === 'version' ? 'clay' : 'red'}
             title={problem.kind === 'version' ? words.changedTitle : 'We couldn’t record that'}
           >
-            <Stack gap="xs" align="flex-start">
-              <Text fz="sm">{problem.message}</Text>
+            <div className="qp-stack" data-gap="xs" data-align="start">
+              <p>{problem.message}</p>
               {problem.kind === 'version' && (
-                <Button size="xs" color="clay" onClick={() => browser.reload()}>
+                <Button size="xs" variant="clay" onClick={() => browser.reload()}>
                   {words.reload}
                 </Button>
               )}
-            </Stack>
+            </div>
           </Alert>
         )}
         <Button type="submit" size="md" loading={accept.isPending} fullWidth>
           {words.submit}
         </Button>
-      </Stack>
+      </div>
     </form>
   );
 }

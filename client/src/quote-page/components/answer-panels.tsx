@@ -1,4 +1,3 @@
-import { Anchor, List, Paper, Stack, Text, Title } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
 import { useEffect, useRef, type ReactNode } from 'react';
 import { formatDay, formatMoment, formatMoney, formatPercent } from '../lib/format';
@@ -14,9 +13,9 @@ export function FocusHeading({ children, focus }: { children: ReactNode; focus: 
     heading.current?.scrollIntoView({ block: 'start' });
   }, [focus]);
   return (
-    <Title order={2} fz="h3" ref={heading} tabIndex={-1}>
+    <h2 className="qp-h3" ref={heading} tabIndex={-1}>
       {children}
-    </Title>
+    </h2>
   );
 }
 
@@ -40,14 +39,8 @@ export function AcceptedPanel({ view, totals, focus, payment, invoiced }: Accept
   const money = (amount: string) => formatMoney(amount, view.currency);
   const chosen = view.options.filter((o) => acceptance?.optionIds.includes(o.id));
   return (
-    <Paper
-      component="section"
-      p="md"
-      aria-label="Your acceptance"
-      withBorder
-      style={{ borderColor: 'var(--mantine-color-reed-4)' }}
-    >
-      <Stack gap="sm">
+    <section className="qp-card" data-tone="reed" aria-label="Your acceptance">
+      <div className="qp-stack" data-gap="sm">
         <FocusHeading focus={focus}>
           {invoiced
             ? 'Your acceptance'
@@ -56,25 +49,21 @@ export function AcceptedPanel({ view, totals, focus, payment, invoiced }: Accept
               : 'Thank you'}
         </FocusHeading>
         {acceptance && (
-          <Text fz="sm">
+          <p className="qp-sm">
             You accepted this quote on {formatMoment(acceptance.acceptedAt)}, as{' '}
             <strong>{acceptance.fullName}</strong>.
-          </Text>
+          </p>
         )}
         <div>
-          <Text fz="sm" fw={600}>
-            Options you chose
-          </Text>
+          <p className="qp-sm qp-strong">Options you chose</p>
           {chosen.length ? (
-            <List fz="sm" spacing={2}>
+            <ul className="qp-list qp-sm" data-spacing="tight">
               {chosen.map((o) => (
-                <List.Item key={o.id}>{o.label}</List.Item>
+                <li key={o.id}>{o.label}</li>
               ))}
-            </List>
+            </ul>
           ) : (
-            <Text fz="sm" c="dimmed">
-              None — the quote as it stands.
-            </Text>
+            <p className="qp-sm qp-dimmed">None — the quote as it stands.</p>
           )}
         </div>
         {invoiced ? (
@@ -102,8 +91,8 @@ export function AcceptedPanel({ view, totals, focus, payment, invoiced }: Accept
           />
         )}
         {payment}
-      </Stack>
-    </Paper>
+      </div>
+    </section>
   );
 }
 
@@ -111,25 +100,24 @@ export function AcceptedPanel({ view, totals, focus, payment, invoiced }: Accept
 export function DeclinedPanel({ view, focus }: { view: QuoteView; focus: boolean }) {
   const email = view.company.replyToEmail;
   return (
-    <Paper component="section" p="md" bg="stone.1" aria-label="You declined this quote">
-      <Stack gap="xs">
+    <section className="qp-card" data-tone="muted" aria-label="You declined this quote">
+      <div className="qp-stack" data-gap="xs">
         <FocusHeading focus={focus}>You declined this quote</FocusHeading>
-        <Text fz="sm">
+        <p className="qp-sm">
           {view.declinedAt ? `You declined it on ${formatDay(view.declinedAt)}. ` : ''}
           Thank you for letting {view.company.name} know.
-        </Text>
-        <Text fz="sm">
+        </p>
+        <p className="qp-sm">
           Changed your mind?{' '}
           {email ? (
             <>
-              Write to <Anchor href={`mailto:${email}`}>{email}</Anchor> and they can send you a new
-              quote.
+              Write to <a href={`mailto:${email}`}>{email}</a> and they can send you a new quote.
             </>
           ) : (
             `Contact ${view.company.name} and they can send you a new quote.`
           )}
-        </Text>
-      </Stack>
-    </Paper>
+        </p>
+      </div>
+    </section>
   );
 }

@@ -1,11 +1,9 @@
-import { Anchor, Button, Paper, Stack, Text, Title } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
+import { isCredit, type QuoteChangeOrder } from '../lib/change-order';
 import { formatDay, formatMoney, formatQuantity } from '../lib/format';
+import { ButtonLink } from '../ui/button';
 import { FocusHeading } from './answer-panels';
 import { MoneyRows, Section } from './section';
-
-/** The change order a link carries, with its own answer (the quote itself was accepted before). */
-export type QuoteChangeOrder = NonNullable<QuoteView['changeOrder']>;
 
 type ChangeOrderSectionProps = {
   view: QuoteView;
@@ -13,17 +11,6 @@ type ChangeOrderSectionProps = {
   /** Where the accept and decline forms are, while the change waits for an answer. */
   answerHref?: string;
 };
-
-/** A change that takes off more than it adds: the homeowner's price goes down. */
-export function isCredit(change: QuoteChangeOrder): boolean {
-  // Only the sign is read; the figure itself comes from the server.
-  return Number(change.total) < 0;
-}
-
-/** A credit's amount as the homeowner reads it, "1174.58" for a total of "-1174.58". */
-export function creditAmount(change: QuoteChangeOrder): string {
-  return change.total.replace(/^-/, '');
-}
 
 function lineQuantity(line: QuoteChangeOrder['lines'][number]): string {
   if (line.change === 'added') return `${formatQuantity(line.quantity)} ${line.unit}`;
@@ -43,21 +30,15 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
   const onlyAdds = change.lines.every((line) => line.change === 'added');
   return (
     <Section title="Change to your project">
-      <Stack gap="md">
+      <div className="qp-stack">
         <div>
-          <Text c="dimmed" fz="sm" fw={600}>
-            Change {change.number}
-          </Text>
-          <Title order={3} fz="h4" lh={1.3}>
-            {change.title}
-          </Title>
+          <p className="qp-sm qp-strong qp-dimmed">Change {change.number}</p>
+          <h3 className="qp-h4 qp-tight">{change.title}</h3>
         </div>
         {reason && (
           <div>
-            <Text fz="sm" fw={600}>
-              Why this change
-            </Text>
-            <Text style={{ whiteSpace: 'pre-line' }}>{reason}</Text>
+            <p className="qp-sm qp-strong">Why this change</p>
+            <p className="qp-pre-line">{reason}</p>
           </div>
         )}
         {change.lines.length > 0 && (
@@ -103,12 +84,12 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
           ]}
         />
         <div className="qp-job-total">
-          <Text fz="sm" c="stone.8">
+          <p className="qp-sm">
             {declined
               ? 'Your project total, tax included (unchanged)'
               : 'Your project total, tax included'}
-          </Text>
-          <Text fz="lg" fw={600} data-testid="change-job-total">
+          </p>
+          <p className="qp-lg qp-strong" data-testid="change-job-total">
             {declined ? (
               money(change.previousJobTotal)
             ) : (
@@ -117,24 +98,22 @@ export function ChangeOrderSection({ view, change, answerHref }: ChangeOrderSect
                 <span className="qp-sr-only"> becomes </span> {money(change.newJobTotal)}
               </>
             )}
-          </Text>
+          </p>
         </div>
         {change.state === 'open' && (
           <>
-            <Text fz="sm" c="dimmed">
+            <p className="qp-sm qp-dimmed">
               Nothing changes until you accept. The project details below show the whole job with
               this change.
-            </Text>
+            </p>
             {answerHref && (
               <div>
-                <Button component="a" href={answerHref} size="sm">
-                  Review and accept
-                </Button>
+                <ButtonLink href={answerHref}>Review and accept</ButtonLink>
               </div>
             )}
           </>
         )}
-      </Stack>
+      </div>
     </Section>
   );
 }
@@ -152,52 +131,45 @@ export function ChangeAnsweredPanel({ view, change, focus }: ChangeAnsweredPanel
   const email = view.company.replyToEmail;
   if (change.state === 'accepted') {
     return (
-      <Paper
-        component="section"
-        p="md"
-        aria-label="Change accepted"
-        withBorder
-        style={{ borderColor: 'var(--mantine-color-reed-4)' }}
-      >
-        <Stack gap="xs">
+      <section className="qp-card" data-tone="reed" aria-label="Change accepted">
+        <div className="qp-stack" data-gap="xs">
           <FocusHeading focus={focus}>
             {change.acceptedAt
               ? `Change accepted on ${formatDay(change.acceptedAt)}`
               : 'Change accepted'}
           </FocusHeading>
-          <Text fz="sm">
+          <p className="qp-sm">
             Thank you. {view.company.name} will go ahead with it. Your project total is now{' '}
             <strong>{money(change.newJobTotal)}</strong>, tax included;{' '}
             {isCredit(change)
               ? 'the credit comes off the balance you pay when the work is finished.'
               : 'the change is added to the balance you pay when the work is finished.'}
-          </Text>
-        </Stack>
-      </Paper>
+          </p>
+        </div>
+      </section>
     );
   }
   if (change.state === 'declined') {
     return (
-      <Paper component="section" p="md" bg="stone.1" aria-label="Change declined">
-        <Stack gap="xs">
+      <section className="qp-card" data-tone="muted" aria-label="Change declined">
+        <div className="qp-stack" data-gap="xs">
           <FocusHeading focus={focus}>Change declined</FocusHeading>
-          <Text fz="sm">
+          <p className="qp-sm">
             Thank you for letting {view.company.name} know. Your project goes ahead as agreed before
             this change.
-          </Text>
-          <Text fz="sm">
+          </p>
+          <p className="qp-sm">
             Changed your mind?{' '}
             {email ? (
               <>
-                Write to <Anchor href={`mailto:${email}`}>{email}</Anchor> and they can send the
-                change again.
+                Write to <a href={`mailto:${email}`}>{email}</a> and they can send the change again.
               </>
             ) : (
               `Contact ${view.company.name} and they can send the change again.`
             )}
-          </Text>
-        </Stack>
-      </Paper>
+          </p>
+        </div>
+      </section>
     );
   }
   return null;

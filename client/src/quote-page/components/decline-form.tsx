@@ -1,8 +1,10 @@
-import { Alert, Button, Group, Stack, Text, Textarea, Title } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { useDeclineQuote, useRefreshQuote } from '../api/quote-queries';
 import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
+import { Alert } from '../ui/alert';
+import { Button } from '../ui/button';
+import { TextAreaField } from '../ui/text-fields';
 import type { AcceptSubject } from './accept-form';
 
 const WORDS = {
@@ -78,17 +80,15 @@ export function DeclineForm({
   };
 
   return (
-    <Stack gap="xs">
-      <Title order={3} fz="h5">
-        {words.heading}
-      </Title>
+    <div className="qp-stack" data-gap="xs">
+      <h3 className="qp-h5">{words.heading}</h3>
       {open ? (
         <form onSubmit={submit} noValidate aria-label={words.form}>
-          <Stack gap="sm">
-            <Textarea
+          <div className="qp-stack" data-gap="sm">
+            <TextAreaField
               ref={reasonInput}
               label="Would you like to say why? (optional)"
-              description={`Your note goes to ${view.company.name}. It helps them, but you don’t have to give a reason.`}
+              hint={`Your note goes to ${view.company.name}. It helps them, but you don’t have to give a reason.`}
               rows={4}
               maxLength={2000}
               value={reason}
@@ -96,25 +96,25 @@ export function DeclineForm({
               error={reasonError}
             />
             {error && (
-              <Alert color="red" role="alert" title="We couldn’t record that">
-                {error}
+              <Alert tone="red" role="alert" title="We couldn’t record that">
+                <p>{error}</p>
               </Alert>
             )}
-            <Group gap="sm">
-              <Button type="submit" color="red" variant="light" loading={decline.isPending}>
+            <div className="qp-row">
+              <Button type="submit" variant="danger-light" loading={decline.isPending}>
                 {words.submit}
               </Button>
-              <Button variant="subtle" color="stone" onClick={close} disabled={decline.isPending}>
+              <Button variant="subtle" onClick={close} disabled={decline.isPending}>
                 Cancel
               </Button>
-            </Group>
-          </Stack>
+            </div>
+          </div>
         </form>
       ) : (
         <>
-          <Text fz="sm" c="dimmed">
+          <p className="qp-sm qp-dimmed">
             Let {view.company.name} know. {words.intro}
-          </Text>
+          </p>
           <div>
             <Button ref={opener} variant="default" onClick={() => setOpen(true)}>
               Decline
@@ -122,6 +122,6 @@ export function DeclineForm({
           </div>
         </>
       )}
-    </Stack>
+    </div>
   );
 }

@@ -1,4 +1,3 @@
-import { Stack, Text } from '@mantine/core';
 import type { QuoteInvoiceView, QuoteView } from '@pondwright/shared';
 import type { PaymentReturn } from '../lib/location';
 import { formatDay, formatMoney, isZeroMoney } from '../lib/format';
@@ -21,12 +20,12 @@ export function InvoiceSection({ view, invoice, token, ...payment }: InvoiceSect
   const paid = invoice.status === 'paid';
   return (
     <Section title="Your final invoice">
-      <Stack gap="md">
-        <Text fz="sm">
+      <div className="qp-stack">
+        <p className="qp-sm">
           {paid
             ? `Issued ${formatDay(invoice.issuedAt)}. Thank you for having ${view.company.name} build your project.`
             : `Issued ${formatDay(invoice.issuedAt)}. The work is finished — here’s what’s left to pay.`}
-        </Text>
+        </p>
         <MoneyRows
           label="Your final invoice"
           rows={[
@@ -52,12 +51,12 @@ export function InvoiceSection({ view, invoice, token, ...payment }: InvoiceSect
             },
           ]}
         />
-        <Text fz="xs" c="dimmed">
+        <p className="qp-xs qp-dimmed">
           The project total includes the options you chose and any changes you accepted along the
           way.
-        </Text>
+        </p>
         <PaymentPanel view={view} token={token} purpose="balance" {...payment} />
-      </Stack>
+      </div>
     </Section>
   );
 }

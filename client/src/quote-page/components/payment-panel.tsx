@@ -1,4 +1,3 @@
-import { Alert, Button, Loader, Stack, Text } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
 import { useState } from 'react';
 import { useRefreshQuote, useStartCheckout } from '../api/quote-queries';
@@ -6,6 +5,9 @@ import { isQuoteRequestError, quoteErrorMessage } from '../api/quote-request';
 import type { PaymentReturn } from '../lib/location';
 import { browser } from '../lib/browser';
 import { formatDay, formatMoney, isZeroMoney } from '../lib/format';
+import { Alert } from '../ui/alert';
+import { Button } from '../ui/button';
+import { Spinner } from '../ui/spinner';
 
 /** The deposit after acceptance, or the balance on the final invoice. */
 export type PaymentPurpose = 'deposit' | 'balance';
@@ -60,24 +62,24 @@ export function PaymentPanel({
 
   if (paid && balance) {
     return (
-      <Alert color="reed" variant="light" title="Paid in full — thank you" role="status">
-        <Text fz="sm">
+      <Alert tone="reed" title="Paid in full — thank you" role="status">
+        <p>
           {paidAt
             ? `We received your payment of ${money(amount)} on ${formatDay(paidAt)}.`
             : `We received your payment of ${money(amount)}.`}{' '}
           Nothing more is due. Keep this page for your records.
-        </Text>
+        </p>
       </Alert>
     );
   }
 
   if (paid) {
     return (
-      <Alert color="reed" variant="light" title="Deposit received" role="status">
-        <Text fz="sm">
+      <Alert tone="reed" title="Deposit received" role="status">
+        <p>
           Thank you. We received your deposit of {money(amount)}
           {paidAt ? ` on ${formatDay(paidAt)}` : ''}. Keep this page or the PDF for your records.
-        </Text>
+        </p>
       </Alert>
     );
   }
@@ -85,41 +87,35 @@ export function PaymentPanel({
   if (confirming && !waitedOut) {
     return (
       <Alert
-        color="reed"
-        variant="light"
+        tone="reed"
         title="Thank you — we’re confirming your payment"
         role="status"
-        icon={<Loader size="sm" color="reed" aria-hidden="true" />}
+        icon={<Spinner size="sm" />}
       >
-        <Text fz="sm">This usually takes a few seconds. You can keep this page open.</Text>
+        <p>This usually takes a few seconds. You can keep this page open.</p>
       </Alert>
     );
   }
 
   if (confirming && waitedOut) {
     return (
-      <Alert
-        color="clay"
-        variant="light"
-        title="Your payment is still being confirmed"
-        role="status"
-      >
-        <Stack gap="xs" align="flex-start">
-          <Text fz="sm">
+      <Alert tone="clay" title="Your payment is still being confirmed" role="status">
+        <div className="qp-stack" data-gap="xs" data-align="start">
+          <p>
             We haven’t heard from the payment provider yet. If you completed the payment, there is
             nothing more to do: it will show here once it’s confirmed, and you won’t be charged
             twice.
-          </Text>
+          </p>
           <Button size="xs" variant="default" onClick={onCheckAgain}>
             Check again
           </Button>
-        </Stack>
+        </div>
       </Alert>
     );
   }
 
   if (balance && isZeroMoney(amount)) {
-    return <Text fz="sm">There’s nothing left to pay. Thank you!</Text>;
+    return <p className="qp-sm">There’s nothing left to pay. Thank you!</p>;
   }
 
   const pay = () => {
@@ -137,35 +133,30 @@ export function PaymentPanel({
   };
 
   return (
-    <Stack gap="sm">
+    <div className="qp-stack" data-gap="sm">
       {paymentReturn === 'cancelled' && (
-        <Alert color="stone" variant="light" title="Your payment wasn’t completed" role="status">
-          <Text fz="sm">
+        <Alert tone="stone" title="Your payment wasn’t completed" role="status">
+          <p>
             No money was taken. You can pay the {balance ? 'balance' : 'deposit'} whenever you’re
             ready.
-          </Text>
+          </p>
         </Alert>
       )}
-      <Text fz="sm">
+      <p className="qp-sm">
         {balance
           ? 'You’ll pay on a secure payment page and then come back here.'
           : 'The next step is the deposit. You’ll pay on a secure payment page and then come back here.'}
-      </Text>
+      </p>
       {error && (
-        <Alert color="red" role="alert" title="We couldn’t start the payment">
-          {error}
+        <Alert tone="red" role="alert" title="We couldn’t start the payment">
+          <p>{error}</p>
         </Alert>
       )}
       <div>
-        <Button
-          size="md"
-          onClick={pay}
-          loading={checkout.isPending || leaving}
-          w={{ base: '100%', sm: 'auto' }}
-        >
+        <Button size="md" onClick={pay} loading={checkout.isPending || leaving} fullWidth="phone">
           {balance ? `Pay the balance of ${money(amount)}` : `Pay deposit of ${money(amount)}`}
         </Button>
       </div>
-    </Stack>
+    </div>
   );
 }

@@ -1,7 +1,7 @@
-import { Badge, Box, Checkbox, Group, Stack, Text, Title } from '@mantine/core';
 import type { QuoteOption, QuoteView } from '@pondwright/shared';
 import { useId } from 'react';
 import { formatAddedMoney, formatMoney, isZeroMoney } from '../lib/format';
+import { CheckboxField } from '../ui/checkbox-field';
 import { MoneyRows, Section } from './section';
 
 const KIND_LABELS: Record<QuoteOption['kind'], string> = {
@@ -36,28 +36,15 @@ function optionPrice(option: QuoteOption, currency: string): string {
 
 function OptionLabel({ option, currency }: { option: QuoteOption; currency: string }) {
   return (
-    <Box component="span" style={{ display: 'flex', flexDirection: 'column', gap: 2 }}>
-      <Box
-        component="span"
-        style={{ display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: 6 }}
-      >
-        <Text component="span" fw={600}>
-          {option.label}
-        </Text>
-        <Badge
-          component="span"
-          size="sm"
-          variant="light"
-          color={option.kind === 'add-on' ? 'reed' : 'clay'}
-          fw={600}
-        >
+    <span className="qp-option-label">
+      <span className="qp-option-name">
+        <span className="qp-strong">{option.label}</span>
+        <span className="qp-badge" data-tone={option.kind === 'add-on' ? undefined : 'clay'}>
           {KIND_LABELS[option.kind]}
-        </Badge>
-      </Box>
-      <Text component="span" fz="sm" c="stone.7">
-        {optionPrice(option, currency)}
-      </Text>
-    </Box>
+        </span>
+      </span>
+      <span className="qp-sm qp-dimmed">{optionPrice(option, currency)}</span>
+    </span>
   );
 }
 
@@ -82,55 +69,54 @@ export function PriceSection({
   const optionsHeading = useId();
   return (
     <Section title={title}>
-      <Stack gap="md">
+      <div className="qp-stack">
         <BasePrice view={view} />
         {view.options.length > 0 && (
-          <Stack gap="xs" role="group" aria-labelledby={optionsHeading}>
-            <Title order={3} fz="h5" id={optionsHeading}>
+          <div className="qp-stack" data-gap="xs" role="group" aria-labelledby={optionsHeading}>
+            <h3 className="qp-h5" id={optionsHeading}>
               Options
-            </Title>
-            <Text fz="sm" c="dimmed">
+            </h3>
+            <p className="qp-sm qp-dimmed">
               {onToggle
                 ? 'Tick any you’d like; the total updates as you go. An alternate replaces part of the standard work, and its price is the difference.'
                 : 'An alternate replaces part of the standard work, and its price is the difference.'}
-            </Text>
+            </p>
             {view.options.map((option) => {
               const chosen = chosenIds.includes(option.id);
               return onToggle ? (
-                <div className="qp-option" key={option.id} data-checked={chosen || undefined}>
-                  <Checkbox
+                <div
+                  className="qp-option"
+                  key={option.id}
+                  data-checked={chosen || undefined}
+                  data-control=""
+                >
+                  <CheckboxField
                     checked={chosen}
                     onChange={(event) => onToggle(option.id, event.currentTarget.checked)}
                     label={<OptionLabel option={option} currency={view.currency} />}
-                    styles={{ labelWrapper: { flex: 1 }, body: { alignItems: 'flex-start' } }}
                   />
                 </div>
               ) : (
-                <Group
+                <div
                   key={option.id}
-                  className="qp-option"
+                  className="qp-option qp-option-read-only"
                   data-checked={(accepted && chosen) || undefined}
-                  justify="space-between"
-                  wrap="nowrap"
-                  align="flex-start"
                 >
                   <OptionLabel option={option} currency={view.currency} />
                   {accepted && (
-                    <Text
-                      fz="sm"
-                      fw={600}
-                      c={chosen ? 'reed.8' : 'dimmed'}
-                      style={{ flexShrink: 0 }}
+                    <span
+                      className="qp-sm qp-strong qp-option-verdict"
+                      data-chosen={chosen || undefined}
                     >
                       {chosen ? 'Chosen' : 'Not chosen'}
-                    </Text>
+                    </span>
                   )}
-                </Group>
+                </div>
               );
             })}
-          </Stack>
+          </div>
         )}
-      </Stack>
+      </div>
     </Section>
   );
 }

@@ -1,25 +1,18 @@
-import { Anchor, Button, Group, List, Stack, Text, Title } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
 import { useState } from 'react';
-import { CrossSectionSvg } from '@/components/drawings/cross-section-svg';
-import { PlanSvg } from '@/components/drawings/plan-svg';
 import { quoteUrl } from '../api/quote-request';
 import { formatDay } from '../lib/format';
 import type { LinkKind } from '../lib/link-kind';
+import { ButtonLink } from '../ui/button';
+import { CrossSectionSvg, DrawingSpace, PlanSvg } from './deferred-parts';
 import { Section } from './section';
 
 /** A plain download link (the PDF needs no sign-in); named for what it gets. */
 export function PdfLink({ token, fullWidth }: { token: string; fullWidth?: boolean }) {
   return (
-    <Button
-      component="a"
-      href={quoteUrl(token, '/pdf')}
-      variant="default"
-      size="sm"
-      fullWidth={fullWidth}
-    >
+    <ButtonLink href={quoteUrl(token, '/pdf')} variant="default" fullWidth={fullWidth}>
       Download PDF
-    </Button>
+    </ButtonLink>
   );
 }
 
@@ -27,7 +20,7 @@ export function PdfLink({ token, fullWidth }: { token: string; fullWidth?: boole
 export function QuoteHeader({ view, token }: { view: QuoteView; token: string }) {
   const [logoFailed, setLogoFailed] = useState(false);
   return (
-    <Group component="header" gap="sm" wrap="nowrap">
+    <header className="qp-header">
       {view.company.hasLogo && !logoFailed && (
         <img
           className="qp-logo"
@@ -36,10 +29,8 @@ export function QuoteHeader({ view, token }: { view: QuoteView; token: string })
           onError={() => setLogoFailed(true)}
         />
       )}
-      <Text fw={600} fz="lg" lh={1.25}>
-        {view.company.name}
-      </Text>
-    </Group>
+      <p className="qp-company">{view.company.name}</p>
+    </header>
   );
 }
 
@@ -64,14 +55,10 @@ export function QuoteTitle({
 }) {
   const { estimate } = view;
   return (
-    <Stack gap="xs">
+    <div className="qp-stack" data-gap="xs">
       <div>
-        <Text c="dimmed" fz="sm" fw={600}>
-          {eyebrow(view, kind)}
-        </Text>
-        <Title order={1} fz={{ base: 'h2', sm: 'h1' }} lh={1.2}>
-          {estimate.title}
-        </Title>
+        <p className="qp-sm qp-strong qp-dimmed">{eyebrow(view, kind)}</p>
+        <h1 className="qp-h1">{estimate.title}</h1>
       </div>
       <dl className="qp-facts">
         <dt>Prepared for</dt>
@@ -110,7 +97,7 @@ export function QuoteTitle({
       <div>
         <PdfLink token={token} />
       </div>
-    </Stack>
+    </div>
   );
 }
 
@@ -139,11 +126,11 @@ export function ScopeSection({ view }: { view: QuoteView }) {
   if (paragraphs.length === 0) return null;
   return (
     <Section title="What we’ll build">
-      <Stack gap="sm" className="qp-scope">
+      <div className="qp-stack qp-scope" data-gap="sm">
         {paragraphs.map((p, i) => (
-          <Text key={i}>{p}</Text>
+          <p key={i}>{p}</p>
         ))}
-      </Stack>
+      </div>
     </Section>
   );
 }
@@ -152,11 +139,11 @@ export function IncludedSection({ view }: { view: QuoteView }) {
   if (view.included.length === 0) return null;
   return (
     <Section title="What’s included">
-      <List spacing={6} withPadding={false} styles={{ item: { paddingLeft: 4 } }}>
+      <ul className="qp-list">
         {view.included.map((item) => (
-          <List.Item key={item}>{item}</List.Item>
+          <li key={item}>{item}</li>
         ))}
-      </List>
+      </ul>
     </Section>
   );
 }
@@ -167,11 +154,11 @@ export function DrawingsSection({ view }: { view: QuoteView }) {
   if (!plan && sections.length === 0) return null;
   return (
     <Section title="Drawings">
-      <Stack gap="md">
+      <div className="qp-stack">
         {plan && (
           <figure className="qp-figure">
             <figcaption>From above</figcaption>
-            <PlanSvg plan={plan} />
+            <PlanSvg plan={plan} loadingPlaceholder={<DrawingSpace bounds={plan.boundsFt} />} />
           </figure>
         )}
         {sections.map((section) => (
@@ -181,14 +168,17 @@ export function DrawingsSection({ view }: { view: QuoteView }) {
                 ? `Cross-section of pond ${section.basinIndex + 1}`
                 : 'Cross-section'}
             </figcaption>
-            <CrossSectionSvg section={section} />
+            <CrossSectionSvg
+              section={section}
+              loadingPlaceholder={<DrawingSpace bounds={section.boundsFt} section />}
+            />
           </figure>
         ))}
-        <Text fz="sm" c="dimmed">
+        <p className="qp-sm qp-dimmed">
           The drawings show the planned shape and depths; depths may be drawn taller than scale so
           the shelves are easy to see. They are a guide, not a survey.
-        </Text>
-      </Stack>
+        </p>
+      </div>
     </Section>
   );
 }
@@ -201,13 +191,14 @@ export function TermsSection({ view }: { view: QuoteView }) {
   if (view.terms.length === 0) return null;
   return (
     <Section title="Terms">
-      <List type="ordered" spacing={6} fz="sm">
+      <ol className="qp-list qp-sm">
         {view.terms.map((term, i) => (
-          <List.Item key={i} style={{ whiteSpace: 'pre-line', overflowWrap: 'anywhere' }}>
+          // Inline: the company's line breaks are part of its words, so they hold even without the stylesheet.
+          <li key={i} style={{ whiteSpace: 'pre-line', overflowWrap: 'anywhere' }}>
             {term}
-          </List.Item>
+          </li>
         ))}
-      </List>
+      </ol>
     </Section>
   );
 }
@@ -218,12 +209,12 @@ export const SAFETY_LINE = 'Follow your local codes; electrical work by a licens
 export function SafetySection({ view }: { view: QuoteView }) {
   return (
     <Section title="Safety">
-      <List spacing={6} fz="sm">
+      <ul className="qp-list qp-sm">
         {view.cautions.map((caution, i) => (
-          <List.Item key={i}>{caution}</List.Item>
+          <li key={i}>{caution}</li>
         ))}
-        <List.Item fw={600}>{SAFETY_LINE}</List.Item>
-      </List>
+        <li className="qp-strong">{SAFETY_LINE}</li>
+      </ul>
     </Section>
   );
 }
@@ -246,18 +237,18 @@ export function QuoteFooter({
 }) {
   const email = view.company.replyToEmail;
   return (
-    <Stack component="footer" gap="xs" align="center" py="md">
-      <Text fz="sm" c="dimmed" ta="center">
+    <footer className="qp-stack qp-footer" data-gap="xs">
+      <p className="qp-sm qp-dimmed qp-center">
         Questions about {FOOTER_SUBJECT[kind]}?{' '}
         {email ? (
           <>
-            Write to {view.company.name} at <Anchor href={`mailto:${email}`}>{email}</Anchor>.
+            Write to {view.company.name} at <a href={`mailto:${email}`}>{email}</a>.
           </>
         ) : (
           `Contact ${view.company.name}.`
         )}
-      </Text>
+      </p>
       <PdfLink token={token} />
-    </Stack>
+    </footer>
   );
 }

@@ -1,4 +1,3 @@
-import { Paper, Title } from '@mantine/core';
 import { useId, type ReactNode } from 'react';
 
 type SectionProps = { title: string; children: ReactNode; id?: string };
@@ -7,12 +6,12 @@ type SectionProps = { title: string; children: ReactNode; id?: string };
 export function Section({ title, children, id }: SectionProps) {
   const headingId = useId();
   return (
-    <Paper component="section" p="md" aria-labelledby={headingId} id={id}>
-      <Title order={2} fz="h4" id={headingId} mb="sm">
+    <section className="qp-card" aria-labelledby={headingId} id={id}>
+      <h2 className="qp-h4 qp-card-title" id={headingId}>
         {title}
-      </Title>
+      </h2>
       {children}
-    </Paper>
+    </section>
   );
 }
 

@@ -1,5 +1,5 @@
-import { Button, Container, Loader, Paper, Stack, Text, Title } from '@mantine/core';
 import { useEffect, useRef, type ReactNode } from 'react';
+import { Button } from '../ui/button';
 
 /** A whole-page message (not found, expired, failed), its heading focused so it is read first. */
 function StatusPage({ title, children }: { title: string; children: ReactNode }) {
@@ -9,39 +9,24 @@ function StatusPage({ title, children }: { title: string; children: ReactNode })
     heading.current?.focus();
   }, [title]);
   return (
-    <Container size={560} px="md" py={48} component="main">
-      <Paper p="xl">
-        <Stack gap="sm">
-          <Title order={1} fz="h2" ref={heading} tabIndex={-1}>
-            {title}
-          </Title>
-          {children}
-        </Stack>
-      </Paper>
-    </Container>
-  );
-}
-
-export function QuoteLoading() {
-  return (
-    <Container size={560} px="md" py={64} component="main" aria-busy="true">
-      <Stack align="center" gap="sm">
-        <Loader color="reed" aria-hidden="true" />
-        <Text c="dimmed" role="status">
-          Loading your quote…
-        </Text>
-      </Stack>
-    </Container>
+    <main className="qp-container qp-status-page">
+      <div className="qp-card qp-stack" data-gap="sm">
+        <h1 className="qp-h2" ref={heading} tabIndex={-1}>
+          {title}
+        </h1>
+        {children}
+      </div>
+    </main>
   );
 }
 
 export function QuoteNotFound() {
   return (
     <StatusPage title="We couldn’t find this quote">
-      <Text>
+      <p>
         The link may be incomplete. Open it again from the e-mail you were sent, or ask the company
         that quoted you to send it again.
-      </Text>
+      </p>
     </StatusPage>
   );
 }
@@ -50,7 +35,7 @@ export function QuoteNotFound() {
 export function QuoteLinkGone({ message }: { message: string }) {
   return (
     <StatusPage title="This link has expired or was withdrawn">
-      <Text>{message}</Text>
+      <p>{message}</p>
     </StatusPage>
   );
 }
@@ -58,7 +43,7 @@ export function QuoteLinkGone({ message }: { message: string }) {
 export function QuoteLoadFailed({ message, onRetry }: { message: string; onRetry: () => void }) {
   return (
     <StatusPage title="We couldn’t load your quote">
-      <Text>{message}</Text>
+      <p>{message}</p>
       <div>
         <Button onClick={onRetry}>Try again</Button>
       </div>

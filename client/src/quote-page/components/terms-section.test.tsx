@@ -14,7 +14,7 @@ describe('TermsSection', () => {
       ],
     });
     render(
-      <QuoteProviders env="test">
+      <QuoteProviders>
         <TermsSection view={view} />
       </QuoteProviders>,
     );

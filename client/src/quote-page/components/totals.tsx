@@ -1,6 +1,6 @@
-import { Button, Group, Stack, Text } from '@mantine/core';
 import type { QuoteView } from '@pondwright/shared';
 import { formatMoney, formatPercent } from '../lib/format';
+import { ButtonLink } from '../ui/button';
 import { MoneyRows, Section } from './section';
 
 /** What the homeowner pays with their choices: the total, the deposit and the balance. */
@@ -19,25 +19,23 @@ export function StickySummary({
   const money = (amount: string) => formatMoney(amount, view.currency);
   return (
     <aside className="qp-summary" aria-label="Your total">
-      <Group justify="space-between" wrap="nowrap" gap="sm" align="center">
+      <div className="qp-summary-row">
         <div className="qp-summary-figures" role="status" aria-live="polite" aria-atomic="true">
-          <Text fz="xs" c="dimmed" lh={1.3}>
-            Total with your options, tax included
-          </Text>
-          <Text fz="xl" fw={600} lh={1.25} data-testid="live-total">
+          <p className="qp-xs qp-dimmed">Total with your options, tax included</p>
+          <p className="qp-summary-total" data-testid="live-total">
             {money(totals.total)}
-          </Text>
-          <Text fz="sm" lh={1.3}>
+          </p>
+          <p className="qp-sm">
             Deposit {formatPercent(view.depositPct)}:{' '}
-            <Text component="span" fw={600} fz="sm" data-testid="live-deposit">
+            <span className="qp-strong" data-testid="live-deposit">
               {money(totals.deposit)}
-            </Text>
-          </Text>
+            </span>
+          </p>
         </div>
-        <Button component="a" href={acceptHref} size="sm" style={{ flexShrink: 0 }}>
+        <ButtonLink href={acceptHref} className="qp-summary-action">
           Review and accept
-        </Button>
-      </Group>
+        </ButtonLink>
+      </div>
     </aside>
   );
 }
@@ -55,7 +53,7 @@ export function PaymentScheduleSection({
   const money = (amount: string) => formatMoney(amount, view.currency);
   return (
     <Section title="Payment schedule">
-      <Stack gap="xs">
+      <div className="qp-stack" data-gap="xs">
         <MoneyRows
           label="Payment schedule"
           rows={[
@@ -73,11 +71,11 @@ export function PaymentScheduleSection({
           ]}
         />
         {view.state === 'open' && (
-          <Text fz="sm" c="dimmed">
+          <p className="qp-sm qp-dimmed">
             After you accept, you can pay the deposit online on a secure payment page.
-          </Text>
+          </p>
         )}
-      </Stack>
+      </div>
     </Section>
   );
 }
