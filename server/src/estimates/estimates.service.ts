@@ -243,7 +243,7 @@ export class EstimatesService {
       unchecked as UncheckedContent,
       version.content,
     );
-    await this.writeTransaction(id, async (manager) => {
+    return this.writeTransaction(id, async (manager) => {
       const estimate = await this.lockEstimate(manager, id);
       refuseIfAccepted(estimate);
       // The revision alone decides. The whole draft (~30 KB of JSON, parsed) is read only to answer
@@ -292,8 +292,8 @@ export class EstimatesService {
         ...(estimate.status !== 'draft' ? { statusBefore: estimate.status } : {}),
         ...(withdrawn[0].length > 0 ? { quoteLinksWithdrawn: withdrawn[0].length } : {}),
       });
+      return this.viewIn(manager, id);
     });
-    return this.get(id);
   }
 
   /**
@@ -303,7 +303,7 @@ export class EstimatesService {
   async finalise(id: string, body: unknown, actorId: string): Promise<EstimateView> {
     await this.estimates.getById(id, 'Estimate');
     const { revision } = parse(finaliseEstimateRequestSchema, body);
-    await this.writeTransaction(id, async (manager) => {
+    return this.writeTransaction(id, async (manager) => {
       const estimate = await this.lockEstimate(manager, id);
       refuseIfAccepted(estimate);
       const draft = await this.loadDraft(manager, id);
@@ -339,8 +339,8 @@ export class EstimatesService {
         status,
         reasons: approval.reasons,
       });
+      return this.viewIn(manager, id);
     });
-    return this.get(id);
   }
 
   async getVersion(id: string, versionNumber: string): Promise<EstimateVersionView> {
@@ -465,11 +465,22 @@ export class EstimatesService {
    * A transaction writing estimate `id`, queued behind this process's other writes to it (see
    * WriteQueue): waiting for the estimate's row lock would hold a pooled connection.
    */
-  private writeTransaction(
+  private writeTransaction<T>(
     id: string,
-    work: (manager: EntityManager) => Promise<void>,
-  ): Promise<void> {
+    work: (manager: EntityManager) => Promise<T>,
+  ): Promise<T> {
     return this.writes.run(id, () => this.dataSource.transaction(work));
+  }
+
+  /**
+   * The estimate as its own transaction wrote it, for the answer to a write. Read on the transaction's
+   * connection: read after the commit on another, it could wait for a free pooled connection under
+   * load and answer 503 for a save that was stored (npm run bench, before this).
+   */
+  private async viewIn(manager: EntityManager, id: string): Promise<EstimateView> {
+    const view = await estimateView(manager, id, this.tenant.companyId);
+    if (!view) throw new AppError('NOT_FOUND', 'Estimate not found');
+    return view;
   }
 
   private lockEstimate(manager: EntityManager, id: string): Promise<Estimate> {
