@@ -46,6 +46,9 @@ export function useQuote(
   return useQuery({
     ...quoteQueryOptions(token),
     refetchInterval: (query) => pollEvery(query.state.data),
+    // The page's first answer (main.tsx) may already be an error when this mounts: a dead link is
+    // not asked for twice (each unknown token counts towards the address's limit); "Try again" asks.
+    retryOnMount: false,
   });
 }
 
