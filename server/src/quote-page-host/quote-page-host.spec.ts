@@ -12,13 +12,16 @@ import { PublicQuotesService } from '../quotes/public-quotes.service';
 import { WrongTokenThrottle } from '../quotes/wrong-token-throttle.service';
 import { compressAnswers } from '../common/http/compress-answers';
 import { clientStaticFiles } from './client-static-files';
-import { QuotePageHostModule } from './quote-page-host.module';
+import { QuotePageHostModule, withQuotePreload } from './quote-page-host.module';
 
 // A built client of two pages, served as app.module serves it: the staff app's index.html for page
 // paths, quote.html for `/q/<token>`, and `/api` left to the API.
 const dist = mkdtempSync(join(tmpdir(), 'pondwright-dist-'));
 writeFileSync(join(dist, 'index.html'), '<!doctype html><title>staff app</title>');
-writeFileSync(join(dist, 'quote.html'), '<!doctype html><title>quote page</title>');
+writeFileSync(
+  join(dist, 'quote.html'),
+  '<!doctype html><html><head><title>quote page</title></head><body></body></html>',
+);
 // A built script, large enough to be worth compressing (the middleware leaves answers under 1 KB).
 const SCRIPT = Array.from({ length: 400 }, (_, i) => `export const line${i} = ${i};`).join('\n');
 mkdirSync(join(dist, 'assets'));
@@ -129,5 +132,31 @@ describe('the quote page host', () => {
     expect(plain.headers['content-encoding']).toBeUndefined();
     const index = await request(app.getHttpServer()).get('/').expect(200);
     expect(index.headers['cache-control']).toBe('no-cache');
+  });
+
+  it('asks the browser for a live link’s quote with the HTML, and for no other', async () => {
+    const preload =
+      '<link rel="preload" href="/api/quotes/qt_7hGm2pXc9RkLw4Vn" as="fetch" crossorigin="anonymous" />';
+    const live = await request(app.getHttpServer()).get('/q/qt_7hGm2pXc9RkLw4Vn').expect(200);
+    expect(live.text).toContain(preload);
+    expect(live.text.indexOf(preload)).toBeLessThan(live.text.indexOf('</head>'));
+    for (const [path, status] of [
+      ['/q/qt_unknown', 404],
+      ['/q/qt_expired', 410],
+    ] as const) {
+      const dead = await request(app.getHttpServer()).get(path).expect(status);
+      expect(dead.text).not.toContain('rel="preload"');
+    }
+    wrongTokensFrom.length = 0;
+  });
+});
+
+describe('withQuotePreload', () => {
+  it('adds nothing for a token that is not the shape of one we make', () => {
+    const html = '<html><head></head></html>';
+    for (const token of ['a"b', 'x/../y', '<script>', '', 'é']) {
+      expect(withQuotePreload(html, token)).toBe(html);
+    }
+    expect(withQuotePreload(html, null)).toBe(html);
   });
 });
