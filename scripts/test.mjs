@@ -83,10 +83,11 @@ async function main() {
   check('typecheck', 'npm', ['run', 'typecheck']);
   check('lint', 'npm', ['run', 'lint']);
   vitestSuite('shared', 'shared');
+  // Built before its tests: one of them starts the built server to see a weak JWT_SECRET refused.
+  buildServer();
   vitestSuite('server', 'server', [], { DB_TEST_NAME: databaseEnv().DB_TEST_NAME });
   vitestSuite('client', 'client');
 
-  buildServer();
   buildClient();
   await endToEnd();
 
