@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { Writable } from 'node:stream';
 import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { approvedEstimate, tokenFromMail } from './support/quote-fixtures';
+import { approvedEstimate, sendQuote } from './support/quote-fixtures';
 import {
   bearer,
   createTestApp,
@@ -54,17 +54,7 @@ beforeAll(async () => {
   );
   const owner = await signupCompany(testApp);
   const estimate = await approvedEstimate(testApp, owner);
-  await testApp
-    .http()
-    .post(`/api/estimates/${estimate.id}/send`)
-    .set(...bearer(owner))
-    .send({ recipientEmail: 'homeowner@example.test' })
-    .expect(201);
-  const [mail] = (await testApp.dataSource.query(
-    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'`,
-    [owner.companyId],
-  )) as Array<{ text_body: string }>;
-  const quoteToken = tokenFromMail(mail!.text_body);
+  const quoteToken = await sendQuote(testApp, owner, estimate.id);
   secrets.set('JWT signing key', process.env.JWT_SECRET!);
   secrets.set('quote token', quoteToken);
   // Only what the requests below send and receive is judged: the lines written so far are set-up.

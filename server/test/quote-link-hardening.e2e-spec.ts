@@ -2,8 +2,8 @@ import type { QuoteView } from '@pondwright/shared';
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { WRONG_TOKEN_LIMIT } from '../src/quotes/wrong-token-throttle.service';
-import { approvedEstimate, tokenFromMail } from './support/quote-fixtures';
-import { bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
+import { approvedEstimate, sendQuote } from './support/quote-fixtures';
+import { createTestApp, signupCompany, type TestApp } from './support/test-app';
 
 let testApp: TestApp;
 
@@ -23,17 +23,10 @@ const address = () => `198.51.100.${1 + Math.floor(Math.random() * 250)}`;
 async function sentQuote(): Promise<{ token: string; estimateId: string }> {
   const owner = await signupCompany(testApp);
   const estimate = await approvedEstimate(testApp, owner);
-  await testApp
-    .http()
-    .post(`/api/estimates/${estimate.id}/send`)
-    .set(...bearer(owner))
-    .send({ recipientEmail: 'wren@example.test' })
-    .expect(201);
-  const [mail] = (await testApp.dataSource.query(
-    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'`,
-    [owner.companyId],
-  )) as Array<{ text_body: string }>;
-  return { token: tokenFromMail(mail!.text_body), estimateId: estimate.id };
+  return {
+    token: await sendQuote(testApp, owner, estimate.id, 'wren@example.test'),
+    estimateId: estimate.id,
+  };
 }
 
 describe('the public quote link', () => {

@@ -1,13 +1,12 @@
 import {
   DEFAULT_QUOTE_TERMS,
   type CompanyQuoteTerms,
-  type EstimateView,
   type JobView,
   type QuoteView,
 } from '@pondwright/shared';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { approvedEstimate, tokenFromMail } from './support/quote-fixtures';
+import { approvedEstimate, sendQuote, tokenFromMail } from './support/quote-fixtures';
 import { addMember, bearer, createTestApp, signupCompany, type TestApp } from './support/test-app';
 
 let testApp: TestApp;
@@ -18,8 +17,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await testApp.close();
 });
-
-type Owner = Awaited<ReturnType<typeof signupCompany>>;
 
 const OWN_TERMS = [
   'Payment: the balance is due within 14 days of completion, by bank transfer.',
@@ -40,22 +37,6 @@ function putTerms(session: { accessToken: string }, terms: string | null) {
     .put('/api/company/quote-terms')
     .set(...bearer(session))
     .send({ terms });
-}
-
-/** Sends the estimate's latest version and reads the link's token out of the queued e-mail. */
-async function sendQuote(owner: Owner, estimate: EstimateView): Promise<string> {
-  await testApp
-    .http()
-    .post(`/api/estimates/${estimate.id}/send`)
-    .set(...bearer(owner))
-    .send({ recipientEmail: 'wren@example.test' })
-    .expect(201);
-  const [mail] = (await testApp.dataSource.query(
-    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'
-     ORDER BY created_at DESC LIMIT 1`,
-    [owner.companyId],
-  )) as Array<{ text_body: string }>;
-  return tokenFromMail(mail!.text_body);
 }
 
 async function quoteView(token: string): Promise<QuoteView> {
@@ -155,7 +136,9 @@ describe('the company’s quote terms', () => {
 
     expect((await getTerms(other).expect(200)).body.isDefault).toBe(true);
     const estimate = await approvedEstimate(testApp, other);
-    const quote = await quoteView(await sendQuote(other, estimate));
+    const quote = await quoteView(
+      await sendQuote(testApp, other, estimate.id, 'wren@example.test'),
+    );
     expect(companyPart(quote).join('\n\n')).toBe(DEFAULT_QUOTE_TERMS);
   });
 });
@@ -164,11 +147,11 @@ describe('terms on sent quotes', () => {
   it('are frozen when sent: a quote sent before an edit keeps its terms, one sent after gets the new', async () => {
     const owner = await signupCompany(testApp);
     const before = await approvedEstimate(testApp, owner);
-    const beforeToken = await sendQuote(owner, before);
+    const beforeToken = await sendQuote(testApp, owner, before.id, 'wren@example.test');
 
     await putTerms(owner, OWN_TERMS).expect(200);
     const after = await approvedEstimate(testApp, owner);
-    const afterToken = await sendQuote(owner, after);
+    const afterToken = await sendQuote(testApp, owner, after.id, 'wren@example.test');
 
     const old = await quoteView(beforeToken);
     expect(companyPart(old).join('\n\n')).toBe(DEFAULT_QUOTE_TERMS);
@@ -197,7 +180,7 @@ describe('terms on sent quotes', () => {
     expect((await quoteView(beforeToken)).terms).toEqual(old.terms);
 
     // A resend is a new sending: it takes the terms of the day.
-    const resent = await quoteView(await sendQuote(owner, before));
+    const resent = await quoteView(await sendQuote(testApp, owner, before.id, 'wren@example.test'));
     expect(companyPart(resent)).toEqual(['Cancellation: a cancelled job pays for the work done.']);
 
     // The copy on a link cannot be rewritten.
@@ -213,7 +196,7 @@ describe('terms on sent quotes', () => {
     const owner = await signupCompany(testApp);
     await putTerms(owner, OWN_TERMS).expect(200);
     const estimate = await approvedEstimate(testApp, owner);
-    const token = await sendQuote(owner, estimate);
+    const token = await sendQuote(testApp, owner, estimate.id, 'wren@example.test');
     const quote = await quoteView(token);
     await testApp
       .http()

@@ -5,7 +5,7 @@ import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startFakePayments, type FakePayments } from '../../src/dev-fakes/fake-payments';
 import type { CheckoutSession } from '../../src/dev-fakes/checkout-session';
-import { approvedEstimate, tokenFromMail } from '../support/quote-fixtures';
+import { approvedEstimate, sendQuote } from '../support/quote-fixtures';
 import { bearer, createTestApp, signupCompany, type TestApp } from '../support/test-app';
 
 /**
@@ -46,17 +46,7 @@ type Checkout = { owner: Owner; estimateId: string; token: string; session: Chec
 async function openCheckout(checkoutBody?: object): Promise<Checkout & { quote: QuoteView }> {
   const owner = await signupCompany(testApp);
   const estimate = await approvedEstimate(testApp, owner);
-  await testApp
-    .http()
-    .post(`/api/estimates/${estimate.id}/send`)
-    .set(...bearer(owner))
-    .send({ recipientEmail: 'homeowner@example.test' })
-    .expect(201);
-  const [mail] = (await testApp.dataSource.query(
-    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'`,
-    [owner.companyId],
-  )) as Array<{ text_body: string }>;
-  const token = tokenFromMail(mail!.text_body);
+  const token = await sendQuote(testApp, owner, estimate.id);
   const shown = (await testApp.http().get(`/api/quotes/${token}`).expect(200)).body as QuoteView;
   const quote = (
     await testApp
@@ -270,17 +260,7 @@ describe('the deposit amount', () => {
   it('is the server’s: amounts in the accept or checkout body are refused or ignored', async () => {
     const owner = await signupCompany(testApp);
     const estimate = await approvedEstimate(testApp, owner);
-    await testApp
-      .http()
-      .post(`/api/estimates/${estimate.id}/send`)
-      .set(...bearer(owner))
-      .send({ recipientEmail: 'homeowner@example.test' })
-      .expect(201);
-    const [mail] = (await testApp.dataSource.query(
-      `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'`,
-      [owner.companyId],
-    )) as Array<{ text_body: string }>;
-    const token = tokenFromMail(mail!.text_body);
+    const token = await sendQuote(testApp, owner, estimate.id);
     const shown = (await testApp.http().get(`/api/quotes/${token}`).expect(200)).body as QuoteView;
     const accept = {
       fullName: 'Wren Halloway',

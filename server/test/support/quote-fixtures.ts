@@ -86,6 +86,30 @@ export function tokenFromMail(text: string): string {
 }
 
 /**
+ * Sends the estimate's latest version and reads the link's token out of the queued e-mail, so no SMTP
+ * server is needed.
+ */
+export async function sendQuote(
+  testApp: TestApp,
+  owner: Session & { companyId: string },
+  estimateId: string,
+  recipientEmail = 'homeowner@example.test',
+): Promise<string> {
+  await testApp
+    .http()
+    .post(`/api/estimates/${estimateId}/send`)
+    .set(...bearer(owner))
+    .send({ recipientEmail })
+    .expect(201);
+  const [mail] = (await testApp.dataSource.query(
+    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'
+     ORDER BY created_at DESC LIMIT 1`,
+    [owner.companyId],
+  )) as Array<{ text_body: string }>;
+  return tokenFromMail(mail!.text_body);
+}
+
+/**
  * An estimate sent and accepted by the homeowner with the given options (all of them by default). The
  * link's token is read from the queued e-mail, so no SMTP server is needed.
  */
@@ -95,18 +119,7 @@ export async function acceptedEstimate(
   optionIds?: string[],
 ): Promise<{ estimate: EstimateView; token: string; acceptance: QuoteView['acceptance'] }> {
   const estimate = await approvedEstimate(testApp, owner);
-  await testApp
-    .http()
-    .post(`/api/estimates/${estimate.id}/send`)
-    .set(...bearer(owner))
-    .send({ recipientEmail: 'homeowner@example.test' })
-    .expect(201);
-  const [mail] = (await testApp.dataSource.query(
-    `SELECT text_body FROM outbox_messages WHERE company_id = $1 AND kind = 'quote-sent'
-     ORDER BY created_at DESC LIMIT 1`,
-    [owner.companyId],
-  )) as Array<{ text_body: string }>;
-  const token = tokenFromMail(mail!.text_body);
+  const token = await sendQuote(testApp, owner, estimate.id);
   const quote = (await testApp.http().get(`/api/quotes/${token}`).expect(200)).body as QuoteView;
   const accepted = (
     await testApp
