@@ -21,10 +21,11 @@ if (!root) throw new Error('The page has no #root element');
 // The query takes over the request early-quote.ts started; retries and later checks ask again.
 const queryClient = createQuoteQueryClient();
 const token = tokenFromPath(window.location.pathname);
-const firstAnswer = token
+const options = token ? quoteQueryOptions(token) : null;
+const firstAnswer = options
   ? queryClient.prefetchQuery({
-      ...quoteQueryOptions(token),
-      queryFn: (context) => takeEarlyQuote() ?? quoteQueryOptions(token).queryFn!(context),
+      ...options,
+      queryFn: (context) => takeEarlyQuote() ?? options.queryFn!(context),
     })
   : Promise.resolve();
 
